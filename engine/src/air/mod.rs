@@ -1,0 +1,3 @@
+//! Air: the International Standard Atmosphere, humidity and viscosity.
+mod properties;
+pub use properties::AirProperties;

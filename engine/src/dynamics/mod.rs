@@ -1,0 +1,1 @@
+//! The `dynamics` part of the engine (see the crate overview).

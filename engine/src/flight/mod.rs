@@ -1,0 +1,1 @@
+//! The `flight` part of the engine (see the crate overview).

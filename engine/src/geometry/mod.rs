@@ -1,0 +1,1 @@
+//! The `geometry` part of the engine (see the crate overview).

@@ -1,0 +1,1 @@
+//! The `layup` part of the engine (see the crate overview).

@@ -1,0 +1,3 @@
+//! Mass properties of a disc: the revolved solid of an outline filled by a layup.
+mod properties;
+pub use properties::MassProperties;

@@ -1,0 +1,1 @@
+//! The `mesh` part of the engine (see the crate overview).

@@ -1,0 +1,1 @@
+//! The `standards` part of the engine (see the crate overview).
