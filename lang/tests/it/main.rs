@@ -1,0 +1,5 @@
+//! All spinfoil-lang integration tests, compiled into one binary.
+mod bad_scripts;
+mod display;
+mod packages;
+mod session;
