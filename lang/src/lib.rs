@@ -14,8 +14,11 @@
 //! ```
 #![deny(missing_docs)]
 
+mod display;
 mod output;
 mod session;
+
+pub use display::*;
 
 pub use output::{CollectedOutput, MimeBundle, OutputEvent, OutputSink};
 pub use session::{CellError, Session, SessionSettings};

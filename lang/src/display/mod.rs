@@ -1,0 +1,1 @@
+//! Displays: tables and charts that render themselves as MIME bundles.
