@@ -16,6 +16,7 @@
 //! - [`throw`](crate::throw): release states and effort forms.
 //! - [`dynamics`](crate::dynamics): the rigid-body equations of motion.
 //! - [`flight`](crate::flight): integration, landing, trajectory and metrics.
+//! - [`ground`](crate::ground): surfaces, rim contact, impacts and ground play after landing.
 //!
 //! World frame: x downrange, y to the left, z up. The disc's symmetry axis is the unit normal
 //! **n** out of the top of the flight plate; spin ω_s is signed about **n** (a right-handed
@@ -27,6 +28,7 @@ pub mod air;
 pub mod dynamics;
 pub mod flight;
 pub mod geometry;
+pub mod ground;
 pub mod layup;
 pub mod mass;
 pub mod mesh;
@@ -39,6 +41,7 @@ pub use air::*;
 pub use dynamics::*;
 pub use flight::*;
 pub use geometry::*;
+pub use ground::*;
 pub use layup::*;
 pub use mass::*;
 pub use mesh::*;

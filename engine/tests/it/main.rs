@@ -4,6 +4,7 @@ mod aero;
 mod air;
 mod common;
 mod flight;
+mod ground;
 mod mass;
 mod throw;
 mod wind;

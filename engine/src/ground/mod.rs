@@ -1,0 +1,1 @@
+//! Ground: surfaces, contact with the rim, impacts and ground play after landing.
