@@ -1,0 +1,36 @@
+use super::doc::{FieldDoc, FnDoc};
+use super::docs::Docs;
+use rhai::Engine;
+
+/// Registers script functions together with their docs, so no function goes undocumented.
+pub(crate) struct Registrar<'a> {
+    /// The engine functions are registered in.
+    pub engine: &'a mut Engine,
+    docs: &'a mut Docs,
+    section: String,
+}
+
+impl<'a> Registrar<'a> {
+    /// A registrar writing into `engine` and `docs`.
+    pub fn new(engine: &'a mut Engine, docs: &'a mut Docs) -> Self {
+        Self { engine, docs, section: String::new() }
+    }
+
+    /// Starts a package section: the functions documented next belong to it.
+    pub fn section(&mut self, name: &str, about: &str) {
+        self.section = name.to_string();
+        self.docs.sections.push((name.to_string(), about.to_string()));
+    }
+
+    /// Records the doc of a function registered (or about to be) under `doc.name`.
+    pub fn doc(&mut self, mut doc: FnDoc) {
+        doc.section = self.section.clone();
+        self.docs.functions.push(doc);
+    }
+
+    /// Records the doc of a readable field of `type_name`.
+    pub fn field_doc(&mut self, type_name: &str, field: &str, summary: &str) {
+        let section = self.section.clone();
+        self.docs.fields.push(FieldDoc { type_name: type_name.into(), field: field.into(), summary: summary.into(), section });
+    }
+}

@@ -1,0 +1,31 @@
+//! The domain packages: one module per object, each registering its functions with their docs.
+mod show;
+
+use crate::help::Registrar;
+use crate::output::MimeBundle;
+use crate::session::{InterruptHandle, SinkSlot};
+use rhai::Dynamic;
+use std::path::PathBuf;
+
+/// What packages may use besides the engine: the current output sink, the interrupt flag and
+/// the study's folder.
+#[derive(Clone)]
+pub(crate) struct PackageContext {
+    /// Where `show` sends displays.
+    pub sink: SinkSlot,
+    /// Checked between steps of long computations.
+    pub interrupt: InterruptHandle,
+    /// The only folder scripts may read and write (None: no file access).
+    pub study_dir: Option<PathBuf>,
+}
+
+/// Registers every domain package, in reference-page order.
+pub(crate) fn register_packages(reg: &mut Registrar, context: &PackageContext) {
+    show::register(reg, context);
+}
+
+/// The rendering of a domain value, when `value` is one.
+pub(crate) fn render_domain(value: &Dynamic) -> Option<MimeBundle> {
+    let _ = value;
+    None
+}
