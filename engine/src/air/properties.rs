@@ -25,3 +25,16 @@ impl AirProperties {
         Self { density_kg_m3: 1.2250, dynamic_viscosity_pa_s: 1.7894e-5, temperature_k: 288.15, pressure_pa: 101_325.0 }
     }
 }
+
+impl AirProperties {
+    /// Kinematic viscosity μ/ρ in m²/s (infinite in a vacuum).
+    pub fn kinematic_viscosity_m2_s(&self) -> f64 {
+        self.dynamic_viscosity_pa_s / self.density_kg_m3
+    }
+
+    /// Reynolds number ρ V d / μ of a disc of diameter `diameter_m` (m) at airspeed `speed_mps`
+    /// (m/s) in this air (dimensionless; 0 in a vacuum).
+    pub fn reynolds_number(&self, speed_mps: f64, diameter_m: f64) -> f64 {
+        super::reynolds_number(self.density_kg_m3, speed_mps, diameter_m, self.dynamic_viscosity_pa_s)
+    }
+}
