@@ -34,3 +34,15 @@ impl<'a> Registrar<'a> {
         self.docs.fields.push(FieldDoc { type_name: type_name.into(), field: field.into(), summary: summary.into(), section });
     }
 }
+
+impl Registrar<'_> {
+    /// Registers a read-only field `field` on the script type `type_name` with its doc.
+    pub fn getter<T, V>(&mut self, type_name: &str, field: &str, summary: &str, get: impl Fn(&mut T) -> V + Send + Sync + 'static)
+    where
+        T: rhai::Variant + Clone,
+        V: rhai::Variant + Clone,
+    {
+        self.engine.register_get(field, get);
+        self.field_doc(type_name, field, summary);
+    }
+}

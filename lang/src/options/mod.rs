@@ -7,3 +7,4 @@ mod values;
 
 pub use spec::{OptionKind, OptionSpec};
 pub use values::{read_options, OptionValues};
+pub(crate) use spec::{fmt_num, fmt_short};

@@ -90,3 +90,13 @@ pub(crate) fn fmt_num(x: f64) -> String {
         format!("{x}")
     }
 }
+
+/// A number with at most `decimals` decimals, trailing zeros removed (`2.2000` → `2.2`).
+pub(crate) fn fmt_short(x: f64, decimals: usize) -> String {
+    let text = format!("{x:.decimals$}");
+    if text.contains('.') {
+        text.trim_end_matches('0').trim_end_matches('.').to_string()
+    } else {
+        text
+    }
+}

@@ -1,4 +1,8 @@
 //! The domain packages: one module per object, each registering its functions with their docs.
+mod args;
+mod layups;
+mod materials;
+mod outlines;
 mod show;
 
 use crate::help::Registrar;
@@ -21,6 +25,9 @@ pub(crate) struct PackageContext {
 
 /// Registers every domain package, in reference-page order.
 pub(crate) fn register_packages(reg: &mut Registrar, context: &PackageContext) {
+    materials::register(reg);
+    outlines::register(reg);
+    layups::register(reg);
     show::register(reg, context);
 }
 

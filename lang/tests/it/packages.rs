@@ -1,1 +1,110 @@
-//! Integration tests: packages.
+//! Integration tests: the domain packages, driven through scripts, with values equal to the
+//! engine's (the engine is called directly with the same inputs in SI units).
+use super::session::{error, value};
+use spinfoil_engine::{Dimension, DiscFamily, Layup, Material, ParametricOutline, SamplingSettings};
+use spinfoil_lang::{Session, SessionSettings};
+
+fn session() -> Session {
+    Session::new(SessionSettings::default())
+}
+
+fn number(s: &mut Session, code: &str) -> f64 {
+    let text = value(s, code);
+    text.parse().unwrap_or_else(|_| panic!("not a number: {text} from {code}"))
+}
+
+/// Asserts a script's number equals the engine's to 1e-12 relative (scripts print floats
+/// in their shortest round-trip form, which may differ in the last bit of the unit conversion).
+fn assert_same(s: &mut Session, code: &str, engine: f64) {
+    let got = number(s, code);
+    assert!((got - engine).abs() <= 1e-12 * engine.abs().max(1e-300), "{code}: script {got} vs engine {engine}");
+}
+
+#[test]
+fn materials_keep_name_and_density() {
+    let mut s = session();
+    value(&mut s, "let m = material(\"soft base blend\", 0.95);");
+    assert_eq!(value(&mut s, "m.name"), "soft base blend");
+    let expected = Material::from_g_cm3("x", 0.95).unwrap().density_g_cm3();
+    assert_eq!(number(&mut s, "m.density_g_cm3"), expected);
+    assert_eq!(number(&mut s, "material(\"int density\", 2).density_g_cm3"), 2.0, "integers are accepted");
+    let e = error(&mut s, "material(\"air pocket\", -1.0)");
+    assert_eq!(e.kind, "DesignError");
+    assert!(e.message.contains("allowed range"), "{}", e.message);
+}
+
+#[test]
+fn outlines_match_the_engine_in_user_units() {
+    let mut s = session();
+    let cell = "let o = driver_outline(#{ diameter_cm: 21.1, rim_width_cm: 2.0, plate_mm: 2 });";
+    value(&mut s, cell);
+    let engine = ParametricOutline::new(DiscFamily::Driver)
+        .with(Dimension::Diameter, 0.211)
+        .with(Dimension::RimWidth, 0.020)
+        .with(Dimension::PlateThickness, 0.002)
+        .build(&SamplingSettings::default())
+        .unwrap();
+    assert_same(&mut s, "o.diameter_cm", engine.diameter_m() * 100.0);
+    assert_same(&mut s, "o.rim_width_cm", engine.rim_width_m() * 100.0);
+    assert_same(&mut s, "o.rim_depth_cm", engine.rim_depth_m() * 100.0);
+    assert_same(&mut s, "o.plate_mm", engine.plate_thickness_m() * 1000.0);
+    assert_same(&mut s, "o.area_cm2", engine.area_m2() * 1e4);
+    assert_eq!(value(&mut s, "o.family"), "driver");
+    assert_eq!(value(&mut s, "putter_outline().family"), "putter");
+}
+
+#[test]
+fn impossible_outlines_name_the_key_in_user_units() {
+    let mut s = session();
+    let e = error(&mut s, "driver_outline(#{ rim_width_cm: 11 })");
+    assert_eq!(e.kind, "DesignError");
+    assert!(e.message.contains("rim_width_cm = 11"), "{}", e.message);
+    assert!(e.message.contains("allowed range"), "{}", e.message);
+}
+
+#[test]
+fn layups_build_the_engine_layups() {
+    let mut s = session();
+    value(&mut s, "let rim = material(\"dense rim blend\", 1.24); let plate = material(\"soft base blend\", 0.95);");
+    let rim = Material::from_g_cm3("dense rim blend", 1.24).unwrap();
+    let plate = Material::from_g_cm3("soft base blend", 0.95).unwrap();
+    assert_eq!(value(&mut s, "rim_layup(rim, plate, #{ split_radius_cm: 8.4 }).kind"), "overmold");
+    assert_eq!(value(&mut s, "single_layup(plate).kind"), "single");
+    assert_eq!(value(&mut s, "ring_layup(plate, rim, #{ inner_radius_cm: 9, outer_radius_cm: 9.6 }).kind"), "regions");
+    assert_eq!(value(&mut s, "rim_layup(rim, plate, #{ split_radius_cm: 8.4 }).materials.len()"), "2");
+    let _expected = Layup::overmold(plate, rim, 0.084);
+    let e = error(&mut s, "ring_layup(plate, rim, #{ inner_radius_cm: 9.6, outer_radius_cm: 9 })");
+    assert!(e.message.contains("must be larger than inner_radius_cm"), "{}", e.message);
+}
+
+#[test]
+fn option_errors_name_key_value_range_and_position() {
+    let mut s = session();
+    let e = error(&mut s, "let a = 1;\nlet o = driver_outline(#{ diametr_cm: 21.1 });");
+    assert_eq!(e.kind, "OptionError");
+    assert!(e.message.contains("unknown option 'diametr_cm'; did you mean 'diameter_cm'?"), "{}", e.message);
+    assert_eq!((e.line, e.column), (Some(2), Some(9)));
+    let e = error(&mut s, "driver_outline(#{ diameter_cm: 500 })");
+    assert!(e.message.contains("'diameter_cm' = 500 is out of range; expected a number from 1 to 200"), "{}", e.message);
+    let e = error(&mut s, "driver_outline(#{ diameter_cm: \"big\" })");
+    assert!(e.message.contains("is not a number"), "{}", e.message);
+    let e = error(&mut s, "let p = material(\"p\", 1.0); rim_layup(p, p, #{})");
+    assert!(e.message.contains("missing option 'split_radius_cm'"), "{}", e.message);
+}
+
+#[test]
+fn completion_offers_option_keys_of_the_call() {
+    let s = session();
+    let code = "let o = driver_outline(#{ diameter_cm: 21.1, rim_";
+    let c = s.complete(code, code.chars().count());
+    assert!(c.matches.contains(&"rim_width_cm".to_string()) && c.matches.contains(&"rim_depth_cm".to_string()), "{c:?}");
+    assert!(!c.matches.contains(&"diameter_cm".to_string()));
+}
+
+#[test]
+fn completion_offers_fields_after_a_dot() {
+    let mut s = session();
+    value(&mut s, "let m = material(\"a\", 1.0);");
+    let c = s.complete("m.dens", 6);
+    assert_eq!(c.matches, vec!["density_g_cm3".to_string()]);
+}
