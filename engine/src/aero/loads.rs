@@ -101,7 +101,7 @@ pub fn aero_loads(
     let dynamic_pressure_pa = 0.5 * air.density_kg_m3 * speed * speed;
     let area_m2 = std::f64::consts::PI * diameter_m * diameter_m / 4.0;
     let force_scale = dynamic_pressure_pa * area_m2;
-    if !(force_scale > 0.0) || !force_scale.is_finite() {
+    if force_scale.is_nan() || force_scale <= 0.0 || force_scale.is_infinite() {
         let zero = Vector3::zeros();
         return AeroLoads { force_n: zero, moment_nm: zero, input, coefficients };
     }
