@@ -29,6 +29,11 @@ impl InputRangeError {
         }
     }
 
+    /// Like [`InputRangeError::check`], with the range as a `(min, max)` pair.
+    pub fn check_within(field: &'static str, value: f64, range: (f64, f64), unit: &'static str) -> Result<f64, Self> {
+        Self::check(field, value, range.0, range.1, unit)
+    }
+
     fn problem(&self) -> &'static str {
         if self.value.is_finite() {
             "out of range"
