@@ -85,8 +85,8 @@ impl DiscState {
     /// point lies R·sin(tilt) below the centre). The rim's own thickness and the offset between
     /// the centre of mass and the rim plane are neglected.
     pub fn lowest_rim_height_m(&self, radius_m: f64) -> f64 {
-        let nz = self.normal.z / self.normal.norm();
-        self.position_m.z - radius_m * (1.0 - nz * nz).max(0.0).sqrt()
+        // √(n_x² + n_y²) rather than √(1 − n_z²): exact for a level disc, no cancellation
+        self.position_m.z - radius_m * self.normal.x.hypot(self.normal.y) / self.normal.norm()
     }
 
     /// True when every component is finite.
