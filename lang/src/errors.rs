@@ -19,6 +19,26 @@ pub(crate) fn split_kind(text: &str) -> Option<(&str, &str)> {
     KNOWN_KINDS.contains(&kind).then_some((kind, rest))
 }
 
+/// A script type name as users know it (`int`, `float`, `string`, ...).
+pub(crate) fn friendly_type(value: &rhai::Dynamic) -> String {
+    let name = value.type_name();
+    let short = name.rsplit("::").next().unwrap_or(name);
+    match short {
+        "i64" | "i32" => "int".into(),
+        "f64" | "f32" => "float".into(),
+        "ImmutableString" | "string" | "&str" => "string".into(),
+        "Array" | "array" => "array".into(),
+        "Map" | "map" => "map".into(),
+        "()" => "nothing".into(),
+        "DiscValue" => "Disc".into(),
+        "OutlineValue" => "Outline".into(),
+        "ThrowValue" => "Throw".into(),
+        "EnvironmentValue" => "Environment".into(),
+        "FlightValue" => "Flight".into(),
+        other => other.into(),
+    }
+}
+
 /// Levenshtein edit distance between two short names.
 pub(crate) fn edit_distance(a: &str, b: &str) -> usize {
     let b: Vec<char> = b.chars().collect();

@@ -162,6 +162,6 @@ fn describe(value: &Dynamic) -> String {
     if value.is_string() {
         format!("\"{value}\" (a text)")
     } else {
-        format!("{value} (a {})", value.type_name())
+        format!("{value} (a {})", crate::errors::friendly_type(value))
     }
 }

@@ -10,7 +10,7 @@ pub(crate) fn number_arg(ctx: &NativeCallContext, arg: &str, value: &Dynamic, mi
     let x = match (value.as_float(), value.as_int()) {
         (Ok(x), _) => x,
         (_, Ok(i)) => i as f64,
-        _ => return Err(value_error(ctx, format!("{arg} must be a number, got {value} (a {})", value.type_name()))),
+        _ => return Err(value_error(ctx, format!("{arg} must be a number, got {value} (a {})", crate::errors::friendly_type(value)))),
     };
     if !x.is_finite() || x < min || x > max {
         let range = format!("{} to {}", crate::options::fmt_num(min), crate::options::fmt_num(max));

@@ -1,9 +1,13 @@
 //! The domain packages: one module per object, each registering its functions with their docs.
+mod aero_choice;
 mod args;
+mod compare;
+mod discs;
 mod layups;
 mod materials;
 mod outlines;
 mod show;
+mod tables;
 
 use crate::help::Registrar;
 use crate::output::MimeBundle;
@@ -28,11 +32,19 @@ pub(crate) fn register_packages(reg: &mut Registrar, context: &PackageContext) {
     materials::register(reg);
     outlines::register(reg);
     layups::register(reg);
+    discs::register(reg);
+    tables::register(reg);
     show::register(reg, context);
 }
 
 /// The rendering of a domain value, when `value` is one.
 pub(crate) fn render_domain(value: &Dynamic) -> Option<MimeBundle> {
-    let _ = value;
+    use crate::Render;
+    if let Some(table) = value.read_lock::<crate::Table>() {
+        return Some(table.render());
+    }
+    if let Some(disc) = value.read_lock::<discs::DiscValue>() {
+        return Some(compare::mass_table(std::slice::from_ref(&*disc)).render());
+    }
     None
 }

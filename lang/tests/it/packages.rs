@@ -108,3 +108,61 @@ fn completion_offers_fields_after_a_dot() {
     let c = s.complete("m.dens", 6);
     assert_eq!(c.matches, vec!["density_g_cm3".to_string()]);
 }
+
+const TWO_DISCS: &str = r#"
+let plate = material("soft base blend", 0.95);
+let rim = material("dense rim blend", 1.24);
+let outline = driver_outline(#{ diameter_cm: 21.1 });
+let one_piece = disc("P-7 one-piece", outline, single_layup(plate), #{ mass_g: 174 });
+let rim_heavy = disc("P-7 rim-heavy", outline, rim_layup(rim, plate, #{ split_radius_cm: 8.4 }), #{ mass_g: 174 });
+"#;
+
+fn engine_design(layup: Layup) -> spinfoil_engine::DesignReport {
+    let outline = ParametricOutline::new(DiscFamily::Driver).with(Dimension::Diameter, 0.211);
+    spinfoil_engine::DiscDesign::new("x", outline, layup)
+        .with_target(spinfoil_engine::MassTarget::ScaleDensities { mass_kg: 0.174 })
+        .evaluate()
+        .unwrap()
+}
+
+#[test]
+fn discs_expose_the_engines_mass_properties() {
+    let mut s = session();
+    value(&mut s, TWO_DISCS);
+    let plate = Material::from_g_cm3("soft base blend", 0.95).unwrap();
+    let rim = Material::from_g_cm3("dense rim blend", 1.24).unwrap();
+    let one = engine_design(Layup::single(plate.clone())).properties;
+    let two = engine_design(Layup::overmold(plate, rim, 0.084)).properties;
+    assert_same(&mut s, "one_piece.mass_g", one.mass_kg * 1000.0);
+    assert_same(&mut s, "one_piece.spin_inertia_g_cm2", one.spin_inertia_kg_m2 * 1e7);
+    assert_same(&mut s, "rim_heavy.spin_inertia_g_cm2", two.spin_inertia_kg_m2 * 1e7);
+    assert_same(&mut s, "rim_heavy.transverse_inertia_g_cm2", two.transverse_inertia_kg_m2 * 1e7);
+    assert_same(&mut s, "rim_heavy.cg_height_mm", two.cg_height_m * 1000.0);
+    assert_same(&mut s, "rim_heavy.spin_gyration_radius_mm", two.spin_radius_of_gyration_m() * 1000.0);
+    assert!((number(&mut s, "rim_heavy.mass_g") - 174.0).abs() < 1e-9);
+    assert!(number(&mut s, "rim_heavy.spin_inertia_g_cm2") > number(&mut s, "one_piece.spin_inertia_g_cm2"));
+    assert_eq!(value(&mut s, "one_piece.aero"), "demo_driver");
+}
+
+#[test]
+fn compare_mass_gives_a_table_with_units() {
+    let mut s = session();
+    value(&mut s, TWO_DISCS);
+    let csv = value(&mut s, "compare_mass([one_piece, rim_heavy]).to_csv()");
+    assert!(csv.starts_with("design,mass_g,CG height_mm,I_z_g·cm²") || csv.contains("mass_g"), "{csv}");
+    assert_eq!(value(&mut s, "compare_mass([one_piece, rim_heavy]).row_count"), "2");
+    let sink = std::sync::Arc::new(spinfoil_lang::CollectedOutput::default());
+    let bundle = s.eval("compare_mass([one_piece, rim_heavy])", sink).unwrap().unwrap();
+    assert!(bundle.data["text/html"].contains("g·cm²"));
+    let e = error(&mut s, "compare_mass([one_piece, 3])");
+    assert!(e.message.contains("item 1 is a int, not a Disc") || e.message.contains("not a Disc"), "{}", e.message);
+}
+
+#[test]
+fn standard_warnings_are_readable() {
+    let mut s = session();
+    value(&mut s, "let p = material(\"base\", 0.95); let o = driver_outline(#{ diameter_cm: 21.1 });");
+    assert_eq!(value(&mut s, "disc(\"ok\", o, single_layup(p), #{ mass_g: 175 }).warnings.len()"), "0");
+    let heavy = value(&mut s, "disc(\"heavy\", o, single_layup(p), #{ mass_g: 176 }).warnings");
+    assert!(heavy.contains("FAILS"), "{heavy}");
+}

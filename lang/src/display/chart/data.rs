@@ -1,0 +1,94 @@
+//! Plain data the charts are drawn from: labelled series of points, axes with units, flight
+//! tracks, cross-section regions, bar groups.
+
+/// An axis: what it shows and its unit, e.g. `Axis::new("downrange x", "m")`.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Axis {
+    /// What the axis shows.
+    pub title: String,
+    /// Its unit (empty for dimensionless quantities).
+    pub unit: String,
+}
+
+impl Axis {
+    /// An axis with a title and a unit.
+    pub fn new(title: impl Into<String>, unit: impl Into<String>) -> Self {
+        Self { title: title.into(), unit: unit.into() }
+    }
+
+    /// `title (unit)`, or the title alone when there is no unit.
+    pub fn label(&self) -> String {
+        if self.unit.is_empty() { self.title.clone() } else { format!("{} ({})", self.title, self.unit) }
+    }
+}
+
+/// A labelled series of (x, y) points in the chart's axis units.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Series {
+    /// Legend label.
+    pub label: String,
+    /// Points (x, y); non-finite points are skipped when drawn.
+    pub points: Vec<(f64, f64)>,
+}
+
+impl Series {
+    /// A series from a label and points.
+    pub fn new(label: impl Into<String>, points: Vec<(f64, f64)>) -> Self {
+        Self { label: label.into(), points }
+    }
+
+    /// The finite points only.
+    pub fn finite_points(&self) -> Vec<(f64, f64)> {
+        finite(&self.points)
+    }
+}
+
+/// One flight's path for the plan and side views: points in metres, with optional landing
+/// (first ground contact) and rest (where it stopped) points in the same plane.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Track {
+    /// Legend label (e.g. the design or throw name).
+    pub label: String,
+    /// Path points (m): (downrange x, lateral y) for the plan view, (downrange x, height z)
+    /// for the side view.
+    pub points: Vec<(f64, f64)>,
+    /// First ground contact (m), if known.
+    pub landing: Option<(f64, f64)>,
+    /// Where the disc came to rest (m), if known.
+    pub rest: Option<(f64, f64)>,
+}
+
+impl Track {
+    /// A track from a label and path points (m).
+    pub fn new(label: impl Into<String>, points: Vec<(f64, f64)>) -> Self {
+        Self { label: label.into(), points, landing: None, rest: None }
+    }
+
+    /// Sets the landing point (m).
+    pub fn landing(mut self, point: (f64, f64)) -> Self {
+        self.landing = Some(point);
+        self
+    }
+
+    /// Sets the rest point (m).
+    pub fn rest(mut self, point: (f64, f64)) -> Self {
+        self.rest = Some(point);
+        self
+    }
+
+    /// Every finite point of the track, the markers included (for axis ranges).
+    pub(crate) fn all_finite_points(&self) -> Vec<(f64, f64)> {
+        let markers = self.landing.iter().chain(self.rest.iter()).copied();
+        finite(&self.points.iter().copied().chain(markers).collect::<Vec<_>>())
+    }
+}
+
+/// The finite points of a list.
+pub(crate) fn finite(points: &[(f64, f64)]) -> Vec<(f64, f64)> {
+    points.iter().copied().filter(|(x, y)| x.is_finite() && y.is_finite()).collect()
+}
+
+/// True when both coordinates are finite.
+pub(crate) fn point_is_finite(point: (f64, f64)) -> bool {
+    point.0.is_finite() && point.1.is_finite()
+}

@@ -1,0 +1,108 @@
+//! Our legend: a strip of entries above the plot, wrapped into rows, never over the data.
+
+use super::font;
+use super::frame::{Area, Drawn};
+use crate::display::style::{text_width_px, CHART_WIDTH_PX, INK, TEXT_PX};
+use plotters::element::{Circle, PathElement, Polygon, Rectangle, Text};
+use plotters::style::text_anchor::{HPos, VPos};
+use plotters::style::{Color, RGBColor};
+
+/// Left edge of the legend and title, in pixels.
+pub(crate) const LEFT_PX: i32 = 16;
+/// Height of one legend row, in pixels.
+pub(crate) const ROW_PX: i32 = 22;
+const SWATCH_PX: i32 = 20;
+const GAP_PX: i32 = 22;
+
+/// What an entry's swatch looks like.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub(crate) enum Swatch {
+    /// A line (a series).
+    Line(RGBColor),
+    /// A filled block (an area, a bar, a material).
+    Block(RGBColor),
+    /// A filled dot (a landing point, a scatter point).
+    Dot(RGBColor),
+    /// A hollow square (a rest point).
+    Square(RGBColor),
+    /// A filled triangle (the thrower).
+    Triangle(RGBColor),
+    /// A dashed line (a second kind of outline).
+    Dashed(RGBColor),
+    /// A plus-shaped cross (a mean).
+    Cross(RGBColor),
+}
+
+/// One legend entry.
+#[derive(Debug, Clone, PartialEq)]
+pub(crate) struct LegendEntry {
+    /// Its swatch.
+    pub swatch: Swatch,
+    /// Its label.
+    pub label: String,
+}
+
+impl LegendEntry {
+    /// An entry.
+    pub fn new(swatch: Swatch, label: impl Into<String>) -> Self {
+        Self { swatch, label: label.into() }
+    }
+}
+
+/// The left-top position of every entry, relative to the legend's origin.
+fn layout(entries: &[LegendEntry]) -> Vec<(i32, i32)> {
+    let right_edge = CHART_WIDTH_PX as i32 - LEFT_PX;
+    let (mut x, mut y) = (LEFT_PX, 0);
+    let mut places = Vec::with_capacity(entries.len());
+    for entry in entries {
+        let width = SWATCH_PX + 6 + text_width_px(&entry.label, TEXT_PX) as i32;
+        if x > LEFT_PX && x + width > right_edge {
+            (x, y) = (LEFT_PX, y + ROW_PX);
+        }
+        places.push((x, y));
+        x += width + GAP_PX;
+    }
+    places
+}
+
+/// Height in pixels that `entries` take (0 when there is none).
+pub(crate) fn height(entries: &[LegendEntry]) -> i32 {
+    layout(entries).last().map_or(0, |(_, y)| y + ROW_PX)
+}
+
+/// Draws the entries with their top at `top` pixels.
+pub(crate) fn draw(area: &Area, entries: &[LegendEntry], top: i32) -> Drawn {
+    for (entry, (x, y)) in entries.iter().zip(layout(entries)) {
+        let middle = top + y + ROW_PX / 2;
+        draw_swatch(area, entry.swatch, (x, middle))?;
+        let style = font::anchored(font::text(TEXT_PX, INK), HPos::Left, VPos::Center);
+        area.draw(&Text::new(entry.label.clone(), (x + SWATCH_PX + 6, middle), style))?;
+    }
+    Ok(())
+}
+
+fn draw_swatch(area: &Area, swatch: Swatch, (x, y): (i32, i32)) -> Drawn {
+    let centre = (x + SWATCH_PX / 2, y);
+    match swatch {
+        Swatch::Line(c) => area.draw(&PathElement::new(vec![(x, y), (x + SWATCH_PX, y)], c.stroke_width(3)))?,
+        Swatch::Block(c) => area.draw(&Rectangle::new([(x + 2, y - 6), (x + SWATCH_PX - 2, y + 6)], c.filled()))?,
+        Swatch::Dot(c) => area.draw(&Circle::new(centre, 5, c.filled()))?,
+        Swatch::Square(c) => area.draw(&Rectangle::new([(centre.0 - 5, y - 5), (centre.0 + 5, y + 5)], c.stroke_width(2)))?,
+        Swatch::Triangle(c) => area.draw(&Polygon::new(triangle(centre, 6), c.filled()))?,
+        Swatch::Dashed(c) => {
+            for start in [0, 8, 16] {
+                area.draw(&PathElement::new(vec![(x + start, y), (x + start + 4, y)], c.stroke_width(2)))?;
+            }
+        }
+        Swatch::Cross(c) => {
+            area.draw(&PathElement::new(vec![(centre.0 - 6, y), (centre.0 + 6, y)], c.stroke_width(2)))?;
+            area.draw(&PathElement::new(vec![(centre.0, y - 6), (centre.0, y + 6)], c.stroke_width(2)))?;
+        }
+    }
+    Ok(())
+}
+
+/// An upward triangle of half-size `half` pixels around `centre`.
+pub(crate) fn triangle((x, y): (i32, i32), half: i32) -> Vec<(i32, i32)> {
+    vec![(x, y - half), (x + half, y + half), (x - half, y + half)]
+}

@@ -1,0 +1,115 @@
+//! Scatter clouds (e.g. landing points under throw scatter) with each cloud's mean and its
+//! 50 % and 95 % ellipses.
+
+use super::axes::{self, plot_px, Plot};
+use super::bounds::Bounds;
+use super::data::{Axis, Series};
+use super::frame::{Drawn, Frame};
+use super::legend::{LegendEntry, Swatch};
+use super::spread::Spread;
+use crate::display::style::{series_colour, CHART_WIDTH_PX, INK};
+use crate::display::Render;
+use crate::MimeBundle;
+use plotters::element::{Circle, EmptyElement, PathElement};
+use plotters::series::DashedLineSeries;
+use plotters::style::Color;
+
+const PLOT_HEIGHT_PX: f64 = 340.0;
+const ELLIPSE_VERTICES: usize = 96;
+
+/// Clouds of points with their mean and 50 % / 95 % ellipses (from each cloud's mean and
+/// covariance, as for a bivariate normal distribution). As a landing-zone chart it draws both
+/// axes at the same scale and shows the safety caution.
+#[derive(Debug, Clone, PartialEq)]
+pub struct ScatterEllipses {
+    /// Title.
+    pub title: String,
+    /// Horizontal axis.
+    pub x: Axis,
+    /// Vertical axis.
+    pub y: Axis,
+    /// The clouds, one colour each.
+    pub clouds: Vec<Series>,
+    /// Landing zones: equal scales and the safety caution (default true).
+    pub landing_zone: bool,
+}
+
+impl ScatterEllipses {
+    /// An empty landing-zone scatter with a title and axes.
+    pub fn new(title: impl Into<String>, x: Axis, y: Axis) -> Self {
+        Self { title: title.into(), x, y, clouds: Vec::new(), landing_zone: true }
+    }
+
+    /// Adds a cloud of points.
+    pub fn cloud(mut self, series: Series) -> Self {
+        self.clouds.push(series);
+        self
+    }
+
+    fn frame(&self) -> Frame {
+        let mut legend: Vec<LegendEntry> =
+            self.clouds.iter().enumerate().map(|(i, c)| LegendEntry::new(Swatch::Dot(series_colour(i)), c.label.clone())).collect();
+        legend.push(LegendEntry::new(Swatch::Cross(INK), "mean"));
+        legend.push(LegendEntry::new(Swatch::Line(INK), "50 % ellipse"));
+        legend.push(LegendEntry::new(Swatch::Dashed(INK), "95 % ellipse"));
+        let scale = if self.landing_zone { "; equal scales on both axes" } else { "" };
+        let frame = Frame::new(&self.title).subtitle(format!("Ellipses from each cloud's mean and covariance{scale}")).legend(legend);
+        if self.landing_zone { frame.caution() } else { frame }
+    }
+
+    /// The chart as SVG.
+    pub fn to_svg(&self) -> String {
+        let mut points: Vec<(f64, f64)> = self.clouds.iter().flat_map(|c| c.finite_points()).collect();
+        points.extend(self.spreads().iter().flat_map(|s| s.ellipse(0.95, ELLIPSE_VERTICES)));
+        let Some(bounds) = Bounds::of(points) else {
+            return self.frame().no_data("no finite points in any cloud");
+        };
+        let bounds = bounds.padded(0.05, 1.0);
+        let body_px = axes::body_px_for_plot(PLOT_HEIGHT_PX);
+        let bounds = if self.landing_zone { bounds.equal_scale(plot_px((CHART_WIDTH_PX, body_px))) } else { bounds };
+        self.frame().draw(body_px, |area| {
+            let mut plot = axes::draw_axes(area, bounds, &self.x, &self.y)?;
+            for (index, cloud) in self.clouds.iter().enumerate() {
+                draw_cloud(&mut plot, cloud, index)?;
+            }
+            Ok(())
+        })
+    }
+
+    fn spreads(&self) -> Vec<Spread> {
+        self.clouds.iter().filter_map(|c| Spread::of(&c.points)).collect()
+    }
+}
+
+fn draw_cloud(plot: &mut Plot, cloud: &Series, index: usize) -> Drawn {
+    let colour = series_colour(index);
+    let dots = cloud.finite_points().into_iter().map(|p| Circle::new(p, 3, colour.mix(0.5).filled()));
+    plot.draw_series(dots)?;
+    let Some(spread) = Spread::of(&cloud.points).filter(|s| s.count >= 3) else {
+        return Ok(());
+    };
+    plot.draw_series(std::iter::once(PathElement::new(spread.ellipse(0.5, ELLIPSE_VERTICES), colour.stroke_width(2))))?;
+    plot.draw_series(DashedLineSeries::new(spread.ellipse(0.95, ELLIPSE_VERTICES), 6, 4, colour.stroke_width(2)))?;
+    let cross = |a: (i32, i32), b: (i32, i32)| EmptyElement::at(spread.mean) + PathElement::new(vec![a, b], INK.stroke_width(2));
+    plot.draw_series([cross((-7, 0), (7, 0)), cross((0, -7), (0, 7))])?;
+    Ok(())
+}
+
+impl Render for ScatterEllipses {
+    fn render(&self) -> MimeBundle {
+        let mut lines = vec![format!("{} — {} against {}, {} cloud(s)", self.title, self.y.label(), self.x.label(), self.clouds.len())];
+        for cloud in &self.clouds {
+            lines.push(match Spread::of(&cloud.points) {
+                Some(s) => {
+                    let (major, minor, _) = s.semi_axes(0.95);
+                    format!("  {}: {} points, mean ({:.2}, {:.2}), 95 % ellipse semi-axes {major:.2} × {minor:.2}", cloud.label, s.count, s.mean.0, s.mean.1)
+                }
+                None => format!("  {}: fewer than 2 finite points", cloud.label),
+            });
+        }
+        if self.landing_zone {
+            lines.push(crate::display::SAFETY_CAUTION.to_string());
+        }
+        MimeBundle::plain(lines.join("\n")).with("image/svg+xml", self.to_svg())
+    }
+}

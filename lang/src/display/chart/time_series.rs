@@ -1,0 +1,113 @@
+//! Time series as small multiples: one panel per quantity (each with its own unit), stacked
+//! over a shared time axis, one colour per flight across all panels.
+
+use super::axes;
+use super::bounds::Bounds;
+use super::data::{Axis, Series};
+use super::frame::Frame;
+use super::legend::{LegendEntry, Swatch};
+use super::line_chart::{draw_series, draw_zero_line, series_bounds, series_summary};
+use crate::display::style::series_colour;
+use crate::display::Render;
+use crate::MimeBundle;
+
+const PANEL_PLOT_PX: f64 = 130.0;
+
+/// One panel: a quantity with its unit and one series per flight (x = time in s).
+#[derive(Debug, Clone, PartialEq)]
+pub struct Panel {
+    /// The quantity and its unit, e.g. `Axis::new("spin", "rpm")`.
+    pub quantity: Axis,
+    /// One series per flight; the same label gets the same colour in every panel.
+    pub series: Vec<Series>,
+}
+
+impl Panel {
+    /// An empty panel for a quantity.
+    pub fn new(quantity: Axis) -> Self {
+        Self { quantity, series: Vec::new() }
+    }
+
+    /// Adds a flight's series: points (time s, value in the panel's unit).
+    pub fn series(mut self, series: Series) -> Self {
+        self.series.push(series);
+        self
+    }
+}
+
+/// Several quantities against time (speed, spin, roll, angle of attack, wobble), one panel each.
+#[derive(Debug, Clone, PartialEq)]
+pub struct TimeSeries {
+    /// Title.
+    pub title: String,
+    /// The panels, top to bottom.
+    pub panels: Vec<Panel>,
+}
+
+impl TimeSeries {
+    /// An empty time-series chart with a title.
+    pub fn new(title: impl Into<String>) -> Self {
+        Self { title: title.into(), panels: Vec::new() }
+    }
+
+    /// Adds a panel.
+    pub fn panel(mut self, panel: Panel) -> Self {
+        self.panels.push(panel);
+        self
+    }
+
+    /// Every series label in order of first appearance (their colour order).
+    fn labels(&self) -> Vec<String> {
+        let mut labels: Vec<String> = Vec::new();
+        for series in self.panels.iter().flat_map(|p| &p.series) {
+            if !labels.contains(&series.label) {
+                labels.push(series.label.clone());
+            }
+        }
+        labels
+    }
+
+    fn frame(&self) -> Frame {
+        let legend = self.labels().into_iter().enumerate();
+        let entries = legend.map(|(index, label)| LegendEntry::new(Swatch::Line(series_colour(index)), label));
+        Frame::new(&self.title).subtitle("One panel per quantity, all on the same time axis").legend(entries.collect())
+    }
+
+    /// The chart as SVG.
+    pub fn to_svg(&self) -> String {
+        let panels: Vec<(&Panel, Bounds)> =
+            self.panels.iter().filter_map(|p| series_bounds(&p.series).map(|b| (p, b))).collect();
+        let Some(time) = Bounds::of(panels.iter().flat_map(|(_, b)| [(b.x0, 0.0), (b.x1, 0.0)])) else {
+            return self.frame().no_data("no finite points in any panel");
+        };
+        let panel_px = axes::body_px_for_plot(PANEL_PLOT_PX);
+        let labels = self.labels();
+        self.frame().draw(panel_px * panels.len() as u32, |area| {
+            let last = panels.len() - 1;
+            for (index, ((panel, bounds), cell)) in panels.iter().zip(area.split_evenly((panels.len(), 1))).enumerate() {
+                let time_axis = if index == last { Axis::new("time since release", "s") } else { Axis::new("", "") };
+                let bounds = Bounds { x0: time.x0, x1: time.x1, ..*bounds }.padded(0.04, 1.0);
+                let bounds = Bounds { x0: time.x0, x1: time.x1, ..bounds };
+                let mut plot = axes::draw_axes(&cell, bounds, &time_axis, &panel.quantity)?;
+                if bounds.y0 < 0.0 && bounds.y1 > 0.0 {
+                    draw_zero_line(&mut plot, bounds)?;
+                }
+                let colour = |index: usize| {
+                    let label = &panel.series[index].label;
+                    series_colour(labels.iter().position(|l| l == label).unwrap_or(index))
+                };
+                draw_series(&mut plot, &panel.series, colour)?;
+            }
+            Ok(())
+        })
+    }
+}
+
+impl Render for TimeSeries {
+    fn render(&self) -> MimeBundle {
+        let time = Axis::new("time", "s");
+        let parts = self.panels.iter().map(|p| series_summary(&self.title, &time, &p.quantity, &p.series));
+        let summary = if self.panels.is_empty() { format!("{} — no panels", self.title) } else { parts.collect::<Vec<_>>().join("\n") };
+        MimeBundle::plain(summary).with("image/svg+xml", self.to_svg())
+    }
+}
