@@ -1,0 +1,137 @@
+//! Prints, as JSON, seeded throws and where Spinfoil lands them, for the independent Python
+//! reference (`tests/flight_reference.py`, checked by `tests/test_flight_reference.py`).
+//!
+//! `cargo run --release -p spinfoil-engine --example reference_flights` prints 20 seeded
+//! throws flown with precise settings; `... -- typical` prints the benchmark's typical flight
+//! flown with the default settings (used by `scripts/bench-flight`).
+//!
+//! Each record holds everything the reference needs: the body, the coefficient set (serialised
+//! in our axes), the air, a steady wind vector, gravity, the release, the solver tolerances, and
+//! our landing time and position.
+use nalgebra::Vector3;
+use rand::{Rng, SeedableRng};
+use rand_chacha::ChaCha8Rng;
+use serde_json::{json, Value};
+use spinfoil_engine::*;
+use std::sync::Arc;
+
+/// A wind that is the same everywhere and always (m/s, world frame).
+#[derive(Debug, Clone, Copy)]
+pub struct SteadyWind(pub Vector3<f64>);
+
+impl WindField for SteadyWind {
+    fn velocity_mps(&self, _position_m: &Vector3<f64>, _time_s: f64) -> Vector3<f64> {
+        self.0
+    }
+}
+
+/// One reference throw: body, coefficients, wind, release.
+pub struct ReferenceThrow {
+    /// The disc.
+    pub body: DiscBody,
+    /// Its coefficient set.
+    pub model: LinearCoefficients,
+    /// Steady wind, m/s.
+    pub wind_mps: Vector3<f64>,
+    /// The release.
+    pub release: ReleaseState,
+}
+
+impl ReferenceThrow {
+    /// Conditions: sea-level standard air, this throw's steady wind, standard gravity.
+    pub fn conditions(&self) -> FlightConditions {
+        FlightConditions { wind: Arc::new(SteadyWind(self.wind_mps)), ..FlightConditions::default() }
+    }
+}
+
+/// The disc of Hummel's set (175 g, 0.269 m; value from memory, unverified; CHECKS.md).
+fn hummel_body() -> DiscBody {
+    DiscBody { mass_kg: 0.175, spin_inertia_kg_m2: 0.00235, transverse_inertia_kg_m2: 0.00122, diameter_m: 0.269 }
+}
+
+/// An invented 0.211 m, 0.172 kg driver body (invented for demos).
+fn demo_driver_body() -> DiscBody {
+    DiscBody { mass_kg: 0.172, spin_inertia_kg_m2: 0.00142, transverse_inertia_kg_m2: 0.00075, diameter_m: 0.211 }
+}
+
+/// The typical flight of the benchmark: Hummel's set, a right-hand backhand at 20 m/s and
+/// 80 rad/s, launch 12°, nose 3°, slight hyzer, from 1 m, calm air (lands after about 6.5 s).
+pub fn typical_throw() -> ReferenceThrow {
+    let release = ReleaseState {
+        speed_mps: 20.0,
+        spin_rad_s: 80.0,
+        launch_rad: 12f64.to_radians(),
+        nose_rad: 3f64.to_radians(),
+        roll_rad: 5f64.to_radians(),
+        heading_rad: 0.0,
+        height_m: 1.0,
+        off_axis_rate_rad_s: 0.0,
+        off_axis_direction_rad: 0.0,
+        style: Style::Backhand,
+        hand: Hand::Right,
+    };
+    ReferenceThrow { body: hummel_body(), model: hummel_2003(), wind_mps: Vector3::zeros(), release }
+}
+
+/// The 20 seeded throws: both styles and hands, two coefficient sets, light steady winds.
+pub fn seeded_throws() -> Vec<ReferenceThrow> {
+    let mut rng = ChaCha8Rng::seed_from_u64(20_261_201);
+    (0..20).map(|i| seeded_throw(i, &mut rng)).collect()
+}
+
+fn seeded_throw(i: usize, rng: &mut ChaCha8Rng) -> ReferenceThrow {
+    let (body, model) = if i % 2 == 0 { (hummel_body(), hummel_2003()) } else { (demo_driver_body(), demo_driver()) };
+    let release = ReleaseState {
+        speed_mps: rng.gen_range(14.0..26.0),
+        spin_rad_s: rng.gen_range(50.0..110.0),
+        launch_rad: rng.gen_range(0.03..0.3),
+        nose_rad: rng.gen_range(-0.05..0.1),
+        roll_rad: rng.gen_range(-0.4..0.4),
+        heading_rad: rng.gen_range(-0.3..0.3),
+        height_m: rng.gen_range(0.8..1.6),
+        off_axis_rate_rad_s: rng.gen_range(0.0..5.0),
+        off_axis_direction_rad: rng.gen_range(0.0..std::f64::consts::TAU),
+        style: if i % 4 < 2 { Style::Backhand } else { Style::Forehand },
+        hand: if i % 8 < 4 { Hand::Right } else { Hand::Left },
+    };
+    let wind_mps = Vector3::new(rng.gen_range(-3.0..3.0), rng.gen_range(-3.0..3.0), 0.0);
+    ReferenceThrow { body, model, wind_mps, release }
+}
+
+fn record(throw: &ReferenceThrow, settings: &FlightSettings) -> Value {
+    let conditions = throw.conditions();
+    let flight = fly(&throw.body, &throw.model, &throw.release, &conditions, settings);
+    let outcome = match flight {
+        Ok(f) => json!({
+            "landing_time_s": f.metrics.time_aloft_s,
+            "landing_position_m": f.landing_state.position_m,
+            "carry_m": f.metrics.carry_m,
+            "landing_spin_rad_s": f.metrics.landing_spin_rad_s,
+            "steps": f.accepted_steps,
+        }),
+        Err(e) => json!({ "error": e.to_string() }),
+    };
+    json!({
+        "body": throw.body,
+        "model": throw.model,
+        "air": conditions.air,
+        "wind_mps": throw.wind_mps,
+        "gravity_mps2": conditions.gravity_mps2,
+        "release": throw.release,
+        "fade_side": throw.release.fade_side(),
+        "relative_tolerance": settings.relative_tolerance,
+        "absolute_tolerance": settings.absolute_tolerance,
+        "spinfoil": outcome,
+    })
+}
+
+fn main() {
+    let typical = std::env::args().nth(1).as_deref() == Some("typical");
+    let (throws, settings) = if typical {
+        (vec![typical_throw()], FlightSettings { record_samples: false, ..FlightSettings::default() })
+    } else {
+        (seeded_throws(), FlightSettings { record_samples: false, ..FlightSettings::precise() })
+    };
+    let records: Vec<Value> = throws.iter().map(|t| record(t, &settings)).collect();
+    println!("{}", json!({ "throws": records }));
+}
