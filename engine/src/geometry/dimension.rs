@@ -24,7 +24,7 @@ pub enum Dimension {
 }
 
 impl Dimension {
-    /// Every dimension, in the order they are validated.
+    /// Every dimension.
     pub const ALL: [Dimension; 8] = [
         Dimension::Diameter,
         Dimension::RimWidth,

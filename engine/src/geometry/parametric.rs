@@ -81,6 +81,17 @@ const MIN_WALL_M: f64 = 2e-4;
 const MIN_RIM_THICKNESS_M: f64 = 1e-3;
 /// Largest diameter accepted, m.
 const MAX_DIAMETER_M: f64 = 2.0;
+/// The order in which [`ParametricOutline::validate`] checks ranges.
+const VALIDATION_ORDER: [Dimension; 8] = [
+    Dimension::RimWidth,
+    Dimension::PlateThickness,
+    Dimension::LeadingEdgeRadius,
+    Dimension::DomeHeight,
+    Dimension::PartingLineHeight,
+    Dimension::RimThickness,
+    Dimension::RimDepth,
+    Dimension::Diameter,
+];
 /// Fraction of min(rim width, rim depth) used as the radius of the rim's inner bottom corner.
 pub(crate) const CORNER_FRACTION: f64 = 0.2;
 
@@ -161,8 +172,11 @@ impl ParametricOutline {
         }
     }
 
-    /// Checks every dimension: finite, then within its allowed range given the others (in the
-    /// order of [`Dimension::ALL`]); the first failure is returned.
+    /// Checks every dimension: finite, then within its allowed range given the others; the
+    /// first failure is returned. Dimensions that are usually the culprit of a conflict are
+    /// checked first (rim width, plate thickness, leading-edge radius, dome height, parting
+    /// line, then rim thickness, rim depth, diameter), so a rim wider than the radius is
+    /// reported as a rim-width error, not as a diameter error.
     pub fn validate(&self) -> Result<(), GeometryError> {
         for dimension in Dimension::ALL {
             let value_m = self.get(dimension);
@@ -170,7 +184,7 @@ impl ParametricOutline {
                 return Err(GeometryError::DimensionNotFinite { dimension, value_m });
             }
         }
-        for dimension in Dimension::ALL {
+        for dimension in VALIDATION_ORDER {
             let value_m = self.get(dimension);
             let (min_m, max_m) = self.allowed_range_m(dimension);
             if !(min_m..=max_m).contains(&value_m) {

@@ -5,15 +5,15 @@ use serde::{Deserialize, Serialize};
 #[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
 #[serde(default)]
 pub struct SamplingSettings {
-    /// Largest distance between a curve and the chord that replaces it, m. Default 1e-5 m
-    /// (0.01 mm), which keeps volume and inertia errors well below 0.01 % for disc-sized
-    /// outlines. Allowed range [`SamplingSettings::MIN_TOLERANCE_M`, `SamplingSettings::MAX_TOLERANCE_M`].
+    /// Largest distance between a curve and the chord that replaces it, m. Default 1e-6 m
+    /// (0.001 mm): the volume and I_z of the built-in families then lie within about 0.01 % of
+    /// the exact curves' (the error falls in proportion to the tolerance). Allowed range [`SamplingSettings::MIN_TOLERANCE_M`, `SamplingSettings::MAX_TOLERANCE_M`].
     pub chord_tolerance_m: f64,
 }
 
 impl Default for SamplingSettings {
     fn default() -> Self {
-        Self { chord_tolerance_m: 1e-5 }
+        Self { chord_tolerance_m: 1e-6 }
     }
 }
 
@@ -83,7 +83,12 @@ impl SamplingSettings {
         let sweep = (r_edge_m / radius).asin();
         let centre = RzPoint::new(0.0, z_axis_m - radius);
         let half_pi = std::f64::consts::FRAC_PI_2;
-        self.elliptic_arc(centre, radius, radius, half_pi, half_pi - sweep)
+        let mut points = self.elliptic_arc(centre, radius, radius, half_pi, half_pi - sweep);
+        // Exact ends: on the axis, and at the edge.
+        let last = points.len() - 1;
+        points[0] = RzPoint::new(0.0, z_axis_m);
+        points[last] = RzPoint::new(r_edge_m, z_axis_m - dome_m);
+        points
     }
 }
 
