@@ -1,12 +1,18 @@
-//! The `spinfoil` binary: glue between the command line, Jupyter and a `spinfoil_lang::Session`.
+//! The `spinfoil` binary: glue between the command line and the library's hosts.
+mod cli;
+mod commands;
+
 use clap::Parser;
+use std::process::ExitCode;
 
-/// Spinfoil: study spin-stabilised flying discs from scripts and notebooks.
-#[derive(Parser)]
-#[command(version, about)]
-struct Cli {}
-
-fn main() -> anyhow::Result<()> {
-    let _cli = Cli::parse();
-    Ok(())
+fn main() -> ExitCode {
+    let cli = cli::Cli::parse();
+    match commands::dispatch(cli.command) {
+        Ok(commands::Outcome::Done) => ExitCode::SUCCESS,
+        Ok(commands::Outcome::StudyFailed) => ExitCode::from(1),
+        Err(error) => {
+            eprintln!("spinfoil: {error:#}");
+            ExitCode::from(3)
+        }
+    }
 }

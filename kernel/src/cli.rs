@@ -1,0 +1,94 @@
+//! The command line's grammar (clap).
+use clap::{Args, Parser, Subcommand, ValueEnum};
+use std::path::PathBuf;
+
+const EXIT_CODES: &str = "\
+Exit codes:
+  0  success
+  1  the study failed: a script or notebook cell raised an error (shown with its line and column)
+  2  the command line is wrong (unknown subcommand or option, missing argument)
+  3  a file could not be read or written, or the kernel could not start
+
+Predictions are estimates. Keep clear of the throwing lane, check landing zones for people and
+property, and follow local rules and the course designer's safety guidance.";
+
+/// Spinfoil: study spin-stabilised flying discs from scripts, notebooks and Jupyter.
+#[derive(Parser, Debug)]
+#[command(version, after_help = EXIT_CODES)]
+pub struct Cli {
+    /// What to do.
+    #[command(subcommand)]
+    pub command: Command,
+}
+
+/// The subcommands.
+#[derive(Subcommand, Debug)]
+pub enum Command {
+    /// Run a study script (.rhai): tables in the terminal, charts as SVG files.
+    Run(RunArgs),
+    /// Execute a notebook without Jupyter; write the executed .ipynb and an HTML report.
+    Report(ReportArgs),
+    /// Install the Jupyter kernelspec for this binary (with its logo).
+    InstallKernel(InstallArgs),
+    /// Start the Jupyter kernel (Jupyter calls this with a connection file).
+    Kernel {
+        /// The connection file Jupyter wrote.
+        connection_file: PathBuf,
+    },
+    /// Open an interactive prompt with line editing, history and multi-line input.
+    Shell {
+        /// Folder for charts shown at the prompt.
+        #[arg(long, default_value = "spinfoil-out")]
+        out: PathBuf,
+    },
+}
+
+/// `spinfoil run`.
+#[derive(Args, Debug)]
+pub struct RunArgs {
+    /// The script to run.
+    pub script: PathBuf,
+    /// Folder for charts (chart-001.svg, ...) and table copies.
+    #[arg(long, default_value = "spinfoil-out")]
+    pub out: PathBuf,
+    /// Also save every table shown, as CSV or JSON files.
+    #[arg(long, value_enum)]
+    pub tables: Option<TableFormat>,
+}
+
+/// File format of table copies.
+#[derive(ValueEnum, Clone, Copy, Debug)]
+pub enum TableFormat {
+    /// Comma-separated values, units in the header.
+    Csv,
+    /// JSON with columns, units and rows.
+    Json,
+}
+
+/// `spinfoil report`.
+#[derive(Args, Debug)]
+pub struct ReportArgs {
+    /// The notebook (.ipynb, nbformat 4) to execute.
+    pub notebook: PathBuf,
+    /// Folder for NAME.ipynb (executed) and NAME.html (report).
+    #[arg(long, default_value = "spinfoil-out")]
+    pub out: PathBuf,
+    /// Run the remaining cells after one fails (the exit code is still 1).
+    #[arg(long)]
+    pub keep_going: bool,
+}
+
+/// `spinfoil install-kernel`: exactly one place, the user's folder by default.
+#[derive(Args, Debug)]
+#[group(multiple = false)]
+pub struct InstallArgs {
+    /// Into the user's Jupyter data folder (default).
+    #[arg(long)]
+    pub user: bool,
+    /// Into the active Python environment (VIRTUAL_ENV, CONDA_PREFIX or python3's sys.prefix).
+    #[arg(long)]
+    pub sys_prefix: bool,
+    /// Into PREFIX/share/jupyter/kernels.
+    #[arg(long, value_name = "PREFIX")]
+    pub prefix: Option<PathBuf>,
+}

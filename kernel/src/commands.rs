@@ -1,0 +1,80 @@
+//! Each subcommand, calling the library and reporting in the terminal.
+use crate::cli::{Command, InstallArgs, ReportArgs, RunArgs, TableFormat};
+use anyhow::Context;
+use spinfoil_kernel::kernelspec::{install, InstallTarget};
+use spinfoil_kernel::notebook::{html_report, run_notebook, Notebook, RunSettings};
+use spinfoil_kernel::script::{run_prompt, run_script, ProgressBoardSink, ScriptSettings, TableExport};
+use std::sync::Arc;
+
+/// How a command ended, when it did not fail to run.
+pub enum Outcome {
+    /// Everything ran.
+    Done,
+    /// The study raised an error (exit code 1).
+    StudyFailed,
+}
+
+/// Runs one subcommand.
+pub fn dispatch(command: Command) -> anyhow::Result<Outcome> {
+    match command {
+        Command::Run(args) => run(args),
+        Command::Report(args) => report(args),
+        Command::InstallKernel(args) => install_kernel(args),
+        Command::Kernel { connection_file } => {
+            spinfoil_kernel::jupyter::run_kernel(&connection_file).context("the kernel stopped")?;
+            Ok(Outcome::Done)
+        }
+        Command::Shell { out } => {
+            run_prompt(&out)?;
+            Ok(Outcome::Done)
+        }
+    }
+}
+
+fn run(args: RunArgs) -> anyhow::Result<Outcome> {
+    let export = args.tables.map(|format| match format {
+        TableFormat::Csv => TableExport::Csv,
+        TableFormat::Json => TableExport::Json,
+    });
+    let outcome = run_script(&args.script, &ScriptSettings { out_dir: args.out, export })?;
+    if outcome.write_failures > 0 {
+        anyhow::bail!("{} output file(s) could not be written", outcome.write_failures);
+    }
+    match outcome.error {
+        Some(report) => {
+            eprintln!("{}\n  in {}", report.text(), args.script.display());
+            Ok(Outcome::StudyFailed)
+        }
+        None => Ok(Outcome::Done),
+    }
+}
+
+fn report(args: ReportArgs) -> anyhow::Result<Outcome> {
+    let mut notebook = Notebook::load(&args.notebook)?;
+    let settings = RunSettings { keep_going: args.keep_going, observer: Some(Arc::new(ProgressBoardSink::default())), ..RunSettings::default() };
+    let summary = run_notebook(&mut notebook, &settings);
+    let stem = args.notebook.file_stem().map_or_else(|| "notebook".into(), |s| s.to_string_lossy().to_string());
+    std::fs::create_dir_all(&args.out).with_context(|| format!("cannot create {}", args.out.display()))?;
+    let executed = args.out.join(format!("{stem}.ipynb"));
+    notebook.save(&executed)?;
+    let html = args.out.join(format!("{stem}.html"));
+    std::fs::write(&html, html_report(&notebook, &stem)).with_context(|| format!("cannot write {}", html.display()))?;
+    println!("{} code cells run; wrote {} and {}", summary.cells_run, executed.display(), html.display());
+    for (cell, error) in &summary.errors {
+        eprintln!("cell {} failed:\n{}", cell + 1, error.text());
+    }
+    Ok(if summary.errors.is_empty() { Outcome::Done } else { Outcome::StudyFailed })
+}
+
+fn install_kernel(args: InstallArgs) -> anyhow::Result<Outcome> {
+    let target = match (args.sys_prefix, args.prefix) {
+        (true, _) => InstallTarget::SysPrefix,
+        (false, Some(prefix)) => InstallTarget::Prefix(prefix),
+        (false, None) => InstallTarget::User,
+    };
+    let executable = std::env::current_exe().context("cannot find this program's own path")?;
+    let executable = executable.canonicalize().unwrap_or(executable);
+    let folder = install(&target, &executable)?;
+    println!("Installed kernelspec \"spinfoil\" in {}", folder.display());
+    Ok(Outcome::Done)
+}

@@ -1,0 +1,61 @@
+//! The kernel's event loops: shell and control requests, IOPub publishing, heartbeat, SIGINT.
+use super::connection::ConnectionInfo;
+use super::handlers::{ControlHandlers, ControlOutcome, ShellHandlers};
+use super::iopub::Iopub;
+use super::signer::Signer;
+use super::sockets::{echo_heartbeats, publish_all, receive, send, Sockets};
+use super::wire::WireMessage;
+use super::worker::Worker;
+use spinfoil_lang::SessionSettings;
+use std::time::Duration;
+use zeromq::{RouterSocket, ZmqResult};
+
+/// Serves Jupyter clients on the ports of `info` until a `shutdown_request` arrives.
+pub async fn serve(info: ConnectionInfo) -> ZmqResult<()> {
+    let signer = Signer::new(&info.key);
+    let sockets = Sockets::bind(&info).await?;
+    let (queue, queued) = tokio::sync::mpsc::unbounded_channel();
+    let iopub = Iopub::new(queue);
+    let session_id = uuid::Uuid::new_v4().to_string();
+    iopub.send(WireMessage::orphan("status", &session_id, serde_json::json!({"execution_state": "starting"})));
+    tokio::spawn(publish_all(sockets.iopub, queued, signer.clone()));
+    tokio::spawn(echo_heartbeats(sockets.heartbeat));
+    let worker = Worker::start(SessionSettings::default());
+    tokio::spawn(interrupt_on_sigint(worker.clone()));
+    let shell = ShellHandlers::new(worker.clone(), iopub.clone());
+    tokio::spawn(shell_loop(sockets.shell, shell, iopub.clone(), signer.clone()));
+    let _stdin = sockets.stdin;
+    control_loop(sockets.control, ControlHandlers::new(worker), iopub, signer).await;
+    tokio::time::sleep(Duration::from_millis(100)).await;
+    Ok(())
+}
+
+async fn shell_loop(mut socket: RouterSocket, mut handlers: ShellHandlers, iopub: Iopub, signer: Signer) {
+    while let Ok(request) = receive(&mut socket, &signer).await {
+        iopub.status(&request, "busy");
+        if let Some(reply) = handlers.handle(&request).await {
+            send(&mut socket, &reply, &signer).await;
+        }
+        iopub.status(&request, "idle");
+    }
+}
+
+async fn control_loop(mut socket: RouterSocket, handlers: ControlHandlers, iopub: Iopub, signer: Signer) {
+    while let Ok(request) = receive(&mut socket, &signer).await {
+        iopub.status(&request, "busy");
+        let (reply, outcome) = handlers.handle(&request);
+        if let Some(reply) = reply {
+            send(&mut socket, &reply, &signer).await;
+        }
+        iopub.status(&request, "idle");
+        if outcome == ControlOutcome::Shutdown {
+            return;
+        }
+    }
+}
+
+async fn interrupt_on_sigint(worker: Worker) {
+    while tokio::signal::ctrl_c().await.is_ok() {
+        worker.interrupt();
+    }
+}
