@@ -54,15 +54,16 @@ fn demo_driver_body() -> DiscBody {
     DiscBody { mass_kg: 0.172, spin_inertia_kg_m2: 0.00142, transverse_inertia_kg_m2: 0.00075, diameter_m: 0.211 }
 }
 
-/// The typical flight of the benchmark: Hummel's set, a right-hand backhand at 20 m/s and
-/// 80 rad/s, launch 12°, nose 3°, slight hyzer, from 1 m, calm air (lands after about 6.5 s).
+/// The typical flight of the benchmark: the invented demo driver, a right-hand backhand at
+/// 22 m/s and 95 rad/s (about 15 rev/s), launch 10°, nose 1°, flat, from 1 m, calm sea-level
+/// air (lands after about 6.1 s, about 78 m out).
 pub fn typical_throw() -> ReferenceThrow {
     let release = ReleaseState {
-        speed_mps: 20.0,
-        spin_rad_s: 80.0,
-        launch_rad: 12f64.to_radians(),
-        nose_rad: 3f64.to_radians(),
-        roll_rad: 5f64.to_radians(),
+        speed_mps: 22.0,
+        spin_rad_s: 95.0,
+        launch_rad: 10f64.to_radians(),
+        nose_rad: 1f64.to_radians(),
+        roll_rad: 0.0,
         heading_rad: 0.0,
         height_m: 1.0,
         off_axis_rate_rad_s: 0.0,
@@ -70,7 +71,7 @@ pub fn typical_throw() -> ReferenceThrow {
         style: Style::Backhand,
         hand: Hand::Right,
     };
-    ReferenceThrow { body: hummel_body(), model: hummel_2003(), wind_mps: Vector3::zeros(), release }
+    ReferenceThrow { body: demo_driver_body(), model: demo_driver(), wind_mps: Vector3::zeros(), release }
 }
 
 /// The 20 seeded throws: both styles and hands, two coefficient sets, light steady winds.

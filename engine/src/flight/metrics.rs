@@ -85,8 +85,7 @@ impl MetricsFrame {
 pub(crate) fn flight_metrics(trajectory: &Trajectory, body: &DiscBody, frame: &MetricsFrame) -> FlightMetrics {
     let release = trajectory.state_at(0.0);
     let landing = trajectory.state_at(trajectory.end_time_s);
-    let times = knot_times(trajectory);
-    let states: Vec<DiscState> = times.iter().map(|&t| trajectory.state_at(t)).collect();
+    let (times, states) = knots(trajectory);
     let (apex_time_s, apex_m) = refined_max(trajectory, &times, &states, |s| s.position_m.z);
     let turn_side = -frame.fade_side;
     let (turn_time_s, turn) = refined_max(trajectory, &times, &states, |s| turn_side * frame.lateral_m(&s.position_m));
@@ -118,13 +117,21 @@ pub(crate) fn flight_metrics(trajectory: &Trajectory, body: &DiscBody, frame: &M
     }
 }
 
-/// Release, every accepted step's end, and the landing, ascending.
-fn knot_times(trajectory: &Trajectory) -> Vec<f64> {
-    let mut times = Vec::with_capacity(trajectory.step_times_s.len() + 2);
+/// Release, every accepted step's end before the landing, and the landing: (times s, states).
+fn knots(trajectory: &Trajectory) -> (Vec<f64>, Vec<DiscState>) {
+    let capacity = trajectory.step_times_s.len() + 2;
+    let (mut times, mut states) = (Vec::with_capacity(capacity), Vec::with_capacity(capacity));
     times.push(0.0);
-    times.extend(trajectory.step_times_s.iter().copied().filter(|&t| t > 0.0 && t < trajectory.end_time_s));
+    states.push(trajectory.state_at(0.0));
+    for (&t, y) in trajectory.step_times_s.iter().zip(&trajectory.step_states) {
+        if t > 0.0 && t < trajectory.end_time_s {
+            times.push(t);
+            states.push(DiscState::from_vector(y).projected());
+        }
+    }
     times.push(trajectory.end_time_s);
-    times
+    states.push(trajectory.state_at(trajectory.end_time_s));
+    (times, states)
 }
 
 /// The largest value of `f` over the flight: the best knot, refined by golden-section search
@@ -176,7 +183,8 @@ mod tests {
     fn golden_section_finds_a_parabola_peak() {
         // source: Kiefer (1953), Sequential minimax search for a maximum, Proc. AMS 4, 502–506
         let (t, v) = golden_section_max(&|t: f64| 3.0 - (t - 0.3).powi(2), 0.0, 1.0);
-        assert!((t - 0.3).abs() < 1e-8 && (v - 3.0).abs() < 1e-15);
+        // near a smooth maximum the argmax is resolvable only to about √ε of the scale
+        assert!((t - 0.3).abs() < 1e-7 && (v - 3.0).abs() < 1e-15);
     }
 
     #[test]

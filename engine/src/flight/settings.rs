@@ -6,9 +6,14 @@ use super::FlightError;
 #[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
 #[serde(default)]
 pub struct FlightSettings {
-    /// Relative tolerance of the adaptive Dormand–Prince 5(4) step control. Default 1e-8.
+    /// Relative tolerance of the adaptive Dormand–Prince 5(4) step control. Default 1e-6.
+    ///
+    /// The step size of a spinning disc is mostly bounded by the stability of the explicit
+    /// method against the fast nutation mode (frequency ≈ I_z|ω_s|/I_x), not by accuracy: with
+    /// the defaults, typical throws land within a few µm of [`FlightSettings::precise`]
+    /// (measured; checked to < 1 mm by the flight tests).
     pub relative_tolerance: f64,
-    /// Absolute tolerance of the step control (in the state's SI units). Default 1e-8.
+    /// Absolute tolerance of the step control (in the state's SI units). Default 1e-6.
     pub absolute_tolerance: f64,
     /// Longest flight integrated, s. Default 30 s.
     pub max_time_s: f64,
@@ -37,8 +42,8 @@ pub struct FlightSettings {
 impl Default for FlightSettings {
     fn default() -> Self {
         Self {
-            relative_tolerance: 1e-8,
-            absolute_tolerance: 1e-8,
+            relative_tolerance: 1e-6,
+            absolute_tolerance: 1e-6,
             max_time_s: 30.0,
             sample_interval_s: 0.01,
             record_samples: true,

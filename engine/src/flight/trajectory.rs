@@ -15,8 +15,10 @@ use super::{FlightConditions, FlightError, FlightSettings};
 pub(crate) struct Trajectory {
     dense: ContinuousOutputModel<f64, StateVector>,
     initial: DiscState,
-    /// Times of the accepted steps' ends (s), ascending, all ≤ `end_time_s`.
+    /// Times of the accepted steps' ends (s), ascending, all < `end_time_s` after landing.
     pub step_times_s: Vec<f64>,
+    /// The solver's states at `step_times_s` (not projected).
+    pub step_states: Vec<StateVector>,
     /// End of the flight (landing or time limit), s.
     pub end_time_s: f64,
     /// True when the flight ended by ground contact.
@@ -58,12 +60,15 @@ pub(crate) fn integrate(
     }
     let stats = outcome.map_err(|e| solver_error(e, settings))?;
     let mut step_times_s = solver.x_out().clone();
+    let mut step_states = solver.y_out().clone();
     let stats = (stats.num_eval, stats.accepted_steps, stats.rejected_steps);
-    let mut trajectory = Trajectory { dense, initial, end_time_s: 0.0, landed: false, stats, step_times_s: Vec::new() };
+    let mut trajectory =
+        Trajectory { dense, initial, end_time_s: 0.0, landed: false, stats, step_times_s: Vec::new(), step_states: Vec::new() };
     match stop.take() {
         Some(StopReason::Failed(error)) => return Err(error),
         Some(StopReason::GroundContact) => {
             step_times_s.pop();
+            step_states.pop();
             let after = solver.x_out().last().copied().unwrap_or(0.0);
             let before = step_times_s.last().copied().unwrap_or(0.0);
             trajectory.end_time_s = after;
@@ -74,6 +79,7 @@ pub(crate) fn integrate(
         None => return Err(FlightError::NoLanding { max_time_s: settings.max_time_s }),
     }
     trajectory.step_times_s = step_times_s;
+    trajectory.step_states = step_states;
     Ok(trajectory)
 }
 

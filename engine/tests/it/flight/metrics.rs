@@ -60,3 +60,19 @@ fn metrics_follow_their_definitions() {
     let v = last.velocity_mps;
     assert!((m.heading_change_rad - v.y.atan2(v.x)).abs() < 1e-12);
 }
+
+#[test]
+fn default_tolerances_land_within_a_millimetre_of_precise_ones() {
+    // common practice, no published source: a tighter-tolerance run of the same integrator as
+    // the reference for the default settings' accuracy
+    let body = hummel_body();
+    for (speed, roll) in [(18.0, 0.2), (24.0, -0.3), (27.0, 0.0)] {
+        let r = release(speed, 90.0, 0.17, 0.03, roll);
+        let c = FlightConditions::default();
+        let a = fly(&body, &LinearTestModel, &r, &c, &FlightSettings::default()).unwrap();
+        let b = fly(&body, &LinearTestModel, &r, &c, &FlightSettings::precise()).unwrap();
+        let d = (a.landing_state.position_m - b.landing_state.position_m).norm();
+        assert!(d < 1e-3, "{d} m");
+        assert!((a.metrics.time_aloft_s - b.metrics.time_aloft_s).abs() < 1e-4);
+    }
+}
