@@ -27,18 +27,20 @@ pub(crate) fn without_repeats(points: &[RzPoint]) -> Vec<RzPoint> {
     kept
 }
 
-/// The first pair of edges (by index, edge i runs from point i to point i+1) that cross,
-/// touch, overlap or fold back onto each other; `None` for a simple polygon.
+/// The first pair of edges found (edge i runs from point i to point i+1) that cross, touch,
+/// overlap or fold back onto each other; `None` for a simple polygon. Sweeps the edges in
+/// order of their smallest r so only edges whose bounding boxes overlap are compared.
 pub(crate) fn first_self_intersection(points: &[RzPoint]) -> Option<(usize, usize)> {
-    let n = points.len();
     let boxes: Vec<[f64; 4]> = edges(points).map(|(a, b)| bounding_box(a, b)).collect();
-    for i in 0..n {
-        for j in (i + 1)..n {
-            if !boxes_overlap(&boxes[i], &boxes[j]) {
-                continue;
+    let mut order: Vec<usize> = (0..points.len()).collect();
+    order.sort_by(|&a, &b| boxes[a][0].total_cmp(&boxes[b][0]));
+    for (k, &i) in order.iter().enumerate() {
+        for &j in &order[k + 1..] {
+            if boxes[j][0] > boxes[i][1] {
+                break;
             }
-            if edges_conflict(points, i, j) {
-                return Some((i, j));
+            if boxes_overlap(&boxes[i], &boxes[j]) && edges_conflict(points, i.min(j), i.max(j)) {
+                return Some((i.min(j), i.max(j)));
             }
         }
     }
