@@ -1,9 +1,55 @@
 //! Comparisons of several discs or flights, as tables.
 use super::args::{value_error, Fallible};
 use super::discs::DiscValue;
+use super::flights::{FlightValue, METRICS};
 use crate::help::{FnDoc, Registrar};
 use crate::{Cell, Table};
 use rhai::{Array, NativeCallContext};
+
+/// Registers `compare` (flights).
+pub(crate) fn register_compare_flights(reg: &mut Registrar) {
+    reg.engine.register_fn("compare", compare_flights);
+    reg.doc(FnDoc::new(
+        "compare(flights: array of Flight) -> Table",
+        "A table of flights side by side: release speed (m/s) and spin (rpm), carry, apex, turn and fade (m), time aloft (s), landing spin (rpm) and spin kept (%). Predictions are estimates (see the note under the table).",
+        "compare([fly(a, arm, day), fly(b, arm, day)])",
+    ));
+}
+
+fn compare_flights(ctx: NativeCallContext, items: Array) -> Fallible<Table> {
+    let flights = items_of::<FlightValue>(&ctx, &items, "Flight")?;
+    Ok(flight_table(&flights))
+}
+
+/// The columns of the flight comparison: (metric field, column name, unit, decimals).
+const FLIGHT_COLUMNS: &[(&str, &str, &str, usize)] = &[
+    ("release_speed_mps", "release speed", "m/s", 1),
+    ("release_spin_rpm", "release spin", "rpm", 0),
+    ("carry_m", "carry", "m", 1),
+    ("apex_m", "apex", "m", 1),
+    ("turn_m", "turn", "m", 1),
+    ("fade_m", "fade", "m", 1),
+    ("time_aloft_s", "time aloft", "s", 2),
+    ("landing_spin_rpm", "landing spin", "rpm", 0),
+    ("spin_kept_pct", "spin kept", "%", 0),
+];
+
+/// The comparison table of `flights` (also how a single flight renders).
+pub(crate) fn flight_table(flights: &[FlightValue]) -> Table {
+    let mut table = Table::new("Flights").column("design", "", 0);
+    for (_, name, unit, decimals) in FLIGHT_COLUMNS {
+        table = table.column(*name, *unit, *decimals);
+    }
+    for flight in flights {
+        let mut row = vec![Cell::from(flight.label.as_str())];
+        for (field, ..) in FLIGHT_COLUMNS {
+            let get = METRICS.iter().find(|(f, ..)| f == field).map(|(_, _, g)| *g);
+            row.push(get.map_or(Cell::Empty, |g| Cell::Number(g(flight))));
+        }
+        table = table.row(row);
+    }
+    table.note(crate::SAFETY_CAUTION)
+}
 
 /// Registers `compare_mass`.
 pub(crate) fn register_compare_mass(reg: &mut Registrar) {
@@ -15,19 +61,20 @@ pub(crate) fn register_compare_mass(reg: &mut Registrar) {
     ));
 }
 
-fn discs_of(ctx: &NativeCallContext, items: &Array) -> Fallible<Vec<DiscValue>> {
+/// The items of a script array, each of type `T` (named `what` in errors); at least one.
+pub(crate) fn items_of<T: rhai::Variant + Clone>(ctx: &NativeCallContext, items: &Array, what: &str) -> Fallible<Vec<T>> {
     if items.is_empty() {
-        return Err(value_error(ctx, "give at least one disc, e.g. compare_mass([a, b])".into()));
+        return Err(value_error(ctx, format!("give at least one {what} in the array, e.g. [a, b]")));
     }
     items
         .iter()
         .enumerate()
-        .map(|(i, item)| item.clone().try_cast::<DiscValue>().ok_or_else(|| value_error(ctx, format!("item {i} is a {}, not a Disc", crate::errors::friendly_type(item)))))
+        .map(|(i, item)| item.clone().try_cast::<T>().ok_or_else(|| value_error(ctx, format!("item {i} is a {}, not a {what}", crate::errors::friendly_type(item)))))
         .collect()
 }
 
 fn compare_mass(ctx: NativeCallContext, items: Array) -> Fallible<Table> {
-    Ok(mass_table(&discs_of(&ctx, &items)?))
+    Ok(mass_table(&items_of::<DiscValue>(&ctx, &items, "Disc")?))
 }
 
 /// The mass-property table of `discs` (also how a single disc renders).

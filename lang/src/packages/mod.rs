@@ -3,11 +3,14 @@ mod aero_choice;
 mod args;
 mod compare;
 mod discs;
+mod environments;
+mod flights;
 mod layups;
 mod materials;
 mod outlines;
 mod show;
 mod tables;
+mod throws;
 
 use crate::help::Registrar;
 use crate::output::MimeBundle;
@@ -33,6 +36,9 @@ pub(crate) fn register_packages(reg: &mut Registrar, context: &PackageContext) {
     outlines::register(reg);
     layups::register(reg);
     discs::register(reg);
+    throws::register(reg);
+    environments::register(reg);
+    flights::register(reg);
     tables::register(reg);
     show::register(reg, context);
 }
@@ -45,6 +51,9 @@ pub(crate) fn render_domain(value: &Dynamic) -> Option<MimeBundle> {
     }
     if let Some(disc) = value.read_lock::<discs::DiscValue>() {
         return Some(compare::mass_table(std::slice::from_ref(&*disc)).render());
+    }
+    if let Some(flight) = value.read_lock::<flights::FlightValue>() {
+        return Some(compare::flight_table(std::slice::from_ref(&*flight)).render());
     }
     None
 }

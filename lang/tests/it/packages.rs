@@ -166,3 +166,80 @@ fn standard_warnings_are_readable() {
     let heavy = value(&mut s, "disc(\"heavy\", o, single_layup(p), #{ mass_g: 176 }).warnings");
     assert!(heavy.contains("FAILS"), "{heavy}");
 }
+
+#[test]
+fn release_throws_convert_user_units() {
+    let mut s = session();
+    value(&mut s, "let t = throw_release(#{ speed_kmh: 86.4, spin_rps: 15, launch_deg: 10, nose_deg: 1, hyzer_deg: -5, style: \"forehand\" });");
+    assert_same(&mut s, "t.speed_mps", 86.4 / 3.6);
+    assert_same(&mut s, "t.spin_rpm", 15.0 * 60.0);
+    assert_same(&mut s, "t.launch_deg", 10f64.to_radians().to_degrees());
+    assert_same(&mut s, "t.hyzer_deg", (-5f64).to_radians().to_degrees());
+    assert_eq!(value(&mut s, "t.style"), "forehand");
+    assert_eq!(value(&mut s, "t.hand"), "right");
+    let e = error(&mut s, "throw_release(#{ speed_mps: 20, speed_kmh: 72, spin_rpm: 900 })");
+    assert!(e.message.contains("give only one of the options speed_mps, speed_kmh"), "{}", e.message);
+    let e = error(&mut s, "throw_release(#{ speed_mps: 20 })");
+    assert!(e.message.contains("give one of the options spin_rpm, spin_rps"), "{}", e.message);
+}
+
+#[test]
+fn efforts_give_each_disc_its_own_speed_and_spin() {
+    let mut s = session();
+    value(&mut s, TWO_DISCS);
+    value(&mut s, "let arm = effort(#{ work_j: 48, torque_nm: 1.1, wrist_deg: 140, launch_deg: 9, hyzer_deg: 4 });");
+    let plate = Material::from_g_cm3("soft base blend", 0.95).unwrap();
+    let report = engine_design(Layup::single(plate));
+    let effort = spinfoil_engine::EffortThrow {
+        effort: spinfoil_engine::Effort::Independent(spinfoil_engine::IndependentEffort::new(48.0, 1.1, 140f64.to_radians())),
+        pose: spinfoil_engine::ReleasePose { launch_rad: 9f64.to_radians(), roll_rad: 4f64.to_radians(), ..Default::default() },
+    };
+    let release = effort.release(&report.properties, report.outline.diameter_m() / 2.0).unwrap();
+    assert_same(&mut s, "arm.release_for(one_piece).speed_mps", release.speed_mps);
+    assert_same(&mut s, "arm.release_for(one_piece).spin_rpm", release.spin_rad_s * 60.0 / std::f64::consts::TAU);
+    assert!(number(&mut s, "arm.release_for(rim_heavy).spin_rpm") < number(&mut s, "arm.release_for(one_piece).spin_rpm"), "the rim-heavy disc spins slower from the same effort");
+    let e = error(&mut s, "effort(#{ work_j: 48, torque_nm: 1.1 })");
+    assert!(e.message.contains("give torque_nm and wrist_deg together"), "{}", e.message);
+}
+
+#[test]
+fn environments_match_the_engines_air() {
+    let mut s = session();
+    value(&mut s, "let day = environment(#{ altitude_m: 420, temperature_c: 18, humidity_pct: 60, wind_mps: 3, wind_from_deg: 250 });");
+    let offset = 18.0 + 273.15 - spinfoil_engine::isa_temperature_k(420.0);
+    let air = spinfoil_engine::AirSpec::standard_with_offset(420.0, offset).with_relative_humidity_pct(60.0).build().unwrap();
+    assert_same(&mut s, "day.density_kg_m3", air.density_kg_m3);
+    assert!((number(&mut s, "day.temperature_c") - 18.0).abs() < 1e-9);
+    let measured = spinfoil_engine::AirSpec::measured(95_000.0, 283.15).build().unwrap();
+    assert_same(&mut s, "environment(#{ pressure_hpa: 950, temperature_c: 10 }).density_kg_m3", measured.density_kg_m3);
+    let sea_level = spinfoil_engine::AirSpec::standard(0.0).build().unwrap();
+    assert_same(&mut s, "environment().density_kg_m3", sea_level.density_kg_m3);
+    // ISO 2533:1975 sea-level density 1.2250 kg/m³ (the engine's ISA formulas reproduce it to 1e-7).
+    assert!((number(&mut s, "environment().density_kg_m3") - 1.2250).abs() < 1e-6);
+    let e = error(&mut s, "environment(#{ pressure_hpa: 950 })");
+    assert!(e.message.contains("pressure_hpa needs temperature_c"), "{}", e.message);
+}
+
+#[test]
+fn flights_expose_the_engines_metrics_and_trajectory() {
+    let mut s = session();
+    value(&mut s, TWO_DISCS);
+    value(&mut s, "let t = throw_release(#{ speed_mps: 24, spin_rpm: 900, launch_deg: 10, nose_deg: 1 }); let f = fly(one_piece, t, environment());");
+    let plate = Material::from_g_cm3("soft base blend", 0.95).unwrap();
+    let report = engine_design(Layup::single(plate));
+    let body = spinfoil_engine::DiscBody::from_mass_properties(&report.properties, report.outline.diameter_m());
+    let release = spinfoil_engine::ReleasePose { launch_rad: 10f64.to_radians(), nose_rad: 1f64.to_radians(), ..Default::default() }
+        .with_speed_and_spin(24.0, 900.0 / 60.0 * std::f64::consts::TAU);
+    let conditions = spinfoil_engine::FlightConditions { air: spinfoil_engine::AirSpec::standard(0.0).build().unwrap(), ..Default::default() };
+    let flight = spinfoil_engine::fly(&body, &spinfoil_engine::demo_driver(), &release, &conditions, &Default::default()).unwrap();
+    assert_same(&mut s, "f.carry_m", flight.metrics.carry_m);
+    assert_same(&mut s, "f.apex_m", flight.metrics.apex_m);
+    assert_same(&mut s, "f.turn_m", flight.metrics.turn_m);
+    assert_same(&mut s, "f.fade_m", flight.metrics.fade_m);
+    assert_same(&mut s, "f.time_aloft_s", flight.metrics.time_aloft_s);
+    assert_eq!(value(&mut s, "f.trajectory().row_count"), flight.samples.len().to_string());
+    let csv = value(&mut s, "f.to_csv()");
+    assert!(csv.starts_with("time_s,x_m,y_m,z_m,speed_m_per_s,spin_rpm"), "{}", &csv[..80.min(csv.len())]);
+    let table = value(&mut s, "compare([f, fly(rim_heavy, t)]).row_count");
+    assert_eq!(table, "2");
+}

@@ -1,0 +1,128 @@
+//! Flying a disc: `fly(disc, throw, environment)` and the `Flight` result.
+use super::args::{engine_error, Fallible};
+use super::discs::DiscValue;
+use super::environments::EnvironmentValue;
+use super::throws::ThrowValue;
+use crate::help::{FnDoc, Registrar};
+use crate::{Cell, Table};
+use rhai::NativeCallContext;
+use spinfoil_engine::{Flight, FlightMetrics, FlightSettings, ReleaseState};
+use std::sync::Arc;
+
+/// A flight as scripts hold it: the engine's flight and what it was flown with.
+#[derive(Debug, Clone)]
+pub(crate) struct FlightValue {
+    /// The disc's name (the flight's label in tables and charts).
+    pub label: String,
+    /// The release state the throw gave this disc.
+    pub release: ReleaseState,
+    /// The computed flight.
+    pub flight: Arc<Flight>,
+}
+
+const RPM_PER_RAD_S: f64 = 60.0 / std::f64::consts::TAU;
+
+/// Flies `disc` with `throw` in `environment` (the computation behind the script's `fly`).
+pub(crate) fn fly_disc(disc: &DiscValue, throw: &ThrowValue, environment: &EnvironmentValue) -> Result<FlightValue, String> {
+    let release = throw.release_for(disc)?;
+    let conditions = environment.conditions()?;
+    let flight = spinfoil_engine::fly(&disc.body(), &disc.aero, &release, &conditions, &FlightSettings::default()).map_err(|e| e.to_string())?;
+    Ok(FlightValue { label: disc.design.name.clone(), release, flight: Arc::new(flight) })
+}
+
+/// Registers `fly`, the `Flight` type and its exports.
+pub(crate) fn register(reg: &mut Registrar) {
+    reg.section("flights", "flying a disc from its release to its first ground contact; metrics and the trajectory");
+    reg.engine.register_type_with_name::<FlightValue>("Flight");
+    reg.engine.register_fn("fly", fly);
+    reg.engine.register_fn("fly", |ctx: NativeCallContext, d: DiscValue, t: ThrowValue| fly(ctx, d, t, EnvironmentValue::standard()));
+    reg.doc(FnDoc::new(
+        "fly(disc: Disc, throw: Throw, environment: Environment) -> Flight",
+        "Integrates the 6-degree-of-freedom flight from release to the first ground contact of the rim. The environment may be left out (sea-level standard air, no wind). Predictions are estimates: keep clear of the throwing lane, check landing zones for people and property, and follow local rules and the course designer's safety guidance.",
+        "let f = fly(d, throw_release(#{ speed_mps: 24, spin_rpm: 900, launch_deg: 10 }), environment());\nf.carry_m",
+    ));
+    reg.engine.register_fn("trajectory", |f: &mut FlightValue| trajectory_table(f));
+    reg.doc(FnDoc::new(
+        "trajectory(flight: Flight) -> Table",
+        "The sampled trajectory as a table: time (s), position x, y, z (m; x downrange, y left, z up), speed (m/s), spin (rpm), roll (°, hyzer positive), angle of attack (°), wobble (°).",
+        "fly(d, t).trajectory().to_csv()",
+    ));
+    reg.engine.register_fn("to_csv", |f: &mut FlightValue| trajectory_table(f).to_csv());
+    reg.doc(FnDoc::new("to_csv(flight: Flight) -> string", "The trajectory as CSV text (headers carry units).", "let text = fly(d, t).to_csv();"));
+    register_metric_fields(reg);
+    super::compare::register_compare_flights(reg);
+    reg.engine.register_fn("to_string", |f: &mut FlightValue| {
+        let m = f.flight.metrics;
+        format!("flight of \"{}\": carry {:.1} m, apex {:.1} m, {:.2} s aloft, turn {:.1} m, fade {:.1} m", f.label, m.carry_m, m.apex_m, m.time_aloft_s, m.turn_m, m.fade_m)
+    });
+}
+
+type Metric = (&'static str, &'static str, fn(&FlightValue) -> f64);
+
+/// Every metric readable as a field: (field, doc, value in the field's unit).
+pub(crate) const METRICS: &[Metric] = &[
+    ("carry_m", "horizontal distance from release to landing, m", |f| m(f).carry_m),
+    ("landing_downrange_m", "distance along the release heading to the landing point, m", |f| m(f).landing_downrange_m),
+    ("landing_lateral_m", "offset of the landing point from the release heading line, m (positive toward the fade side)", |f| m(f).landing_lateral_m),
+    ("apex_m", "greatest height of the centre of mass, m", |f| m(f).apex_m),
+    ("apex_time_s", "time of the apex, s", |f| m(f).apex_time_s),
+    ("time_aloft_s", "time from release to landing, s", |f| m(f).time_aloft_s),
+    ("turn_m", "largest excursion to the turn side of the release line, m", |f| m(f).turn_m),
+    ("fade_m", "lateral change from the point of largest turn to landing, toward the fade side, m", |f| m(f).fade_m),
+    ("heading_change_deg", "ground-track heading change from release to landing, ° (positive toward the fade side)", |f| m(f).heading_change_rad.to_degrees()),
+    ("release_speed_mps", "release speed, m/s", |f| f.release.speed_mps),
+    ("release_spin_rpm", "release spin, rpm", |f| m(f).release_spin_rad_s * RPM_PER_RAD_S),
+    ("landing_speed_mps", "speed at landing, m/s", |f| m(f).landing_speed_mps),
+    ("landing_angle_deg", "descent angle at landing, ° below horizontal", |f| m(f).landing_angle_rad.to_degrees()),
+    ("landing_spin_rpm", "spin at landing, rpm", |f| m(f).landing_spin_rad_s * RPM_PER_RAD_S),
+    ("spin_kept_pct", "share of the release spin kept at landing, %", |f| m(f).spin_kept_fraction * 100.0),
+    ("release_angular_momentum_g_m2_s", "angular momentum at release, g·m²/s", |f| m(f).release_angular_momentum_kg_m2_s * 1000.0),
+    ("landing_angular_momentum_g_m2_s", "angular momentum at landing, g·m²/s", |f| m(f).landing_angular_momentum_kg_m2_s * 1000.0),
+    ("max_axis_rate_deg_s", "largest rate of the disc's axis (roll and pitch motion), °/s", |f| m(f).max_axis_rate_rad_s.to_degrees()),
+];
+
+fn m(f: &FlightValue) -> &FlightMetrics {
+    &f.flight.metrics
+}
+
+fn register_metric_fields(reg: &mut Registrar) {
+    for (field, doc, get) in METRICS {
+        let get = *get;
+        reg.getter("Flight", field, doc, move |f: &mut FlightValue| get(f));
+    }
+    reg.getter("Flight", "name", "the disc's name", |f: &mut FlightValue| f.label.clone());
+    reg.getter("Flight", "landed", "true when the flight ended by ground contact", |f: &mut FlightValue| f.flight.landed);
+}
+
+fn fly(ctx: NativeCallContext, disc: DiscValue, throw: ThrowValue, environment: EnvironmentValue) -> Fallible<FlightValue> {
+    fly_disc(&disc, &throw, &environment).map_err(|e| engine_error(&ctx, e))
+}
+
+/// The trajectory samples as a table with units.
+pub(crate) fn trajectory_table(f: &FlightValue) -> Table {
+    let mut table = Table::new(format!("Trajectory of {}", f.label))
+        .column("time", "s", 3)
+        .column("x", "m", 2)
+        .column("y", "m", 2)
+        .column("z", "m", 2)
+        .column("speed", "m/s", 2)
+        .column("spin", "rpm", 0)
+        .column("roll", "°", 1)
+        .column("angle of attack", "°", 1)
+        .column("wobble", "°", 2);
+    for s in &f.flight.samples {
+        let row: Vec<Cell> = vec![
+            s.time_s.into(),
+            s.position_m.x.into(),
+            s.position_m.y.into(),
+            s.position_m.z.into(),
+            s.velocity_mps.norm().into(),
+            (s.spin_rad_s.abs() * RPM_PER_RAD_S).into(),
+            s.roll_rad.to_degrees().into(),
+            s.angle_of_attack_rad.to_degrees().into(),
+            s.wobble_rad.to_degrees().into(),
+        ];
+        table = table.row(row);
+    }
+    table
+}
