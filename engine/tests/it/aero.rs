@@ -323,3 +323,113 @@ fn non_dimensional_rates_scale_with_airspeed() {
     assert_eq!(convention.scale(10.0, 0.0), 0.0);
     assert_eq!(RateConvention::RadPerSecond.scale(10.0, 20.0), 10.0);
 }
+
+/// A typical amateur release (common practice, no published source): 22 m/s, 15 rev/s,
+/// launch 10°, flat, 1.5 m high, given nose angle, style and hand.
+fn amateur_release(nose_deg: f64, style: Style, hand: Hand) -> ReleaseState {
+    ReleaseState {
+        speed_mps: 22.0,
+        spin_rad_s: 15.0 * std::f64::consts::TAU,
+        launch_rad: 10f64.to_radians(),
+        nose_rad: nose_deg.to_radians(),
+        roll_rad: 0.0,
+        heading_rad: 0.0,
+        height_m: 1.5,
+        off_axis_rate_rad_s: 0.0,
+        off_axis_direction_rad: 0.0,
+        style,
+        hand,
+    }
+}
+
+/// Invented demo bodies (invented for demos): driver, midrange, putter, each with its set.
+fn demo_discs() -> [(&'static str, LinearCoefficients, DiscBody); 3] {
+    let body = |mass_kg, spin_inertia_kg_m2, transverse_inertia_kg_m2, diameter_m| DiscBody {
+        mass_kg,
+        spin_inertia_kg_m2,
+        transverse_inertia_kg_m2,
+        diameter_m,
+    };
+    [
+        ("driver", demo_driver(), body(0.175, 0.0022, 0.0011, 0.211)),
+        ("midrange", demo_midrange(), body(0.177, 0.0021, 0.00105, 0.215)),
+        ("putter", demo_putter(), body(0.173, 0.0019, 0.00095, 0.212)),
+    ]
+}
+
+fn fly_demo(model: &LinearCoefficients, body: &DiscBody, release: &ReleaseState) -> Flight {
+    fly(body, model, release, &FlightConditions::default(), &FlightSettings::default()).expect("demo flight lands")
+}
+
+#[test]
+fn demo_driver_carries_turns_right_then_fades_left() {
+    // Plausibility targets, common practice, no published source (issue 3): 80–110 m carry at
+    // sea level from a typical amateur right-hand backhand; first right (world −y), then left.
+    let [(_, driver, body), ..] = demo_discs();
+    for nose_deg in [0.0, 1.0, 2.0] {
+        let flight = fly_demo(&driver, &body, &amateur_release(nose_deg, Style::Backhand, Hand::Right));
+        let m = flight.metrics;
+        assert!((80.0..=110.0).contains(&m.carry_m), "nose {nose_deg}°: carry {:.1} m", m.carry_m);
+        let rightmost = flight.samples.iter().min_by(|a, b| a.position_m.y.total_cmp(&b.position_m.y)).expect("samples");
+        assert!(rightmost.position_m.y < -1.0, "nose {nose_deg}°: turn only {:.2} m", -rightmost.position_m.y);
+        assert!(rightmost.time_s > 2.0 && rightmost.time_s < m.time_aloft_s - 1.0, "turn ends at {:.2} s", rightmost.time_s);
+        let hook = m.landing_position_m.y - rightmost.position_m.y;
+        assert!(hook > 2.0, "nose {nose_deg}°: fade only {hook:.2} m");
+        assert!(m.heading_change_rad > 0.0, "ends heading toward the fade side");
+    }
+}
+
+#[test]
+fn demo_midrange_and_putter_fade_earlier_and_carry_less() {
+    // Plausibility targets, common practice, no published source (issue 3): the more stable
+    // sets start fading earlier and carry less from the same throw.
+    let [(_, driver, driver_body), (_, midrange, midrange_body), (_, putter, putter_body)] = demo_discs();
+    for nose_deg in [0.0, 2.0] {
+        let release = amateur_release(nose_deg, Style::Backhand, Hand::Right);
+        let d = fly_demo(&driver, &driver_body, &release).metrics;
+        let m = fly_demo(&midrange, &midrange_body, &release).metrics;
+        let p = fly_demo(&putter, &putter_body, &release).metrics;
+        assert!(p.carry_m < m.carry_m && m.carry_m < d.carry_m, "carries {} {} {}", p.carry_m, m.carry_m, d.carry_m);
+        assert!(p.turn_time_s < m.turn_time_s && m.turn_time_s < d.turn_time_s, "fade onsets {} {} {}", p.turn_time_s, m.turn_time_s, d.turn_time_s);
+        assert!(m.turn_m < d.turn_m && p.turn_m <= m.turn_m);
+        assert!(m.fade_m > 2.0 && p.fade_m > 2.0);
+    }
+}
+
+#[test]
+fn demo_driver_left_hand_backhand_mirrors_the_right_hand() {
+    // Physics law (reflection symmetry); common practice, no published source.
+    let [(_, driver, body), ..] = demo_discs();
+    let right = fly_demo(&driver, &body, &amateur_release(1.0, Style::Backhand, Hand::Right)).metrics;
+    let left = fly_demo(&driver, &body, &amateur_release(1.0, Style::Backhand, Hand::Left)).metrics;
+    assert!((left.landing_position_m.y + right.landing_position_m.y).abs() < 1e-6);
+    assert!((left.carry_m - right.carry_m).abs() < 1e-6 && (left.turn_m - right.turn_m).abs() < 1e-6);
+}
+
+#[test]
+fn hummel_sets_fly_a_typical_ultimate_throw_without_failing() {
+    // Disc from CHECKS.md (value from memory, unverified): 0.175 kg, 0.269 m, I_z 0.00235,
+    // I_x 0.00122. Throw (common practice, no published source): 14 m/s, 8 rev/s, launch 5°,
+    // nose 5°, 1 m high.
+    // Known finding (not a pass criterion): with the full set as remembered, the roll-from-spin
+    // term C_Rr·r (rates in rad/s) is as large as C_M0 and the flight is implausibly short
+    // (about 12 m); the remembered values or their rate convention need checking against the
+    // thesis before the full set is trusted for distances.
+    let body = DiscBody { mass_kg: 0.175, spin_inertia_kg_m2: 0.00235, transverse_inertia_kg_m2: 0.00122, diameter_m: 0.269 };
+    let release = ReleaseState {
+        speed_mps: 14.0,
+        spin_rad_s: 8.0 * std::f64::consts::TAU,
+        launch_rad: 5f64.to_radians(),
+        nose_rad: 5f64.to_radians(),
+        height_m: 1.0,
+        ..amateur_release(0.0, Style::Backhand, Hand::Right)
+    };
+    for set in [hummel_2003(), hummel_2003_lift_drag()] {
+        let flight = fly_demo(&set, &body, &release);
+        assert!(flight.landed && flight.metrics.carry_m > 5.0, "{}: carry {:.1} m", set.info.name, flight.metrics.carry_m);
+    }
+    // The lift-and-drag set has no moments: the disc keeps its attitude and glides down
+    // (common practice, no published source: a 14 m/s throw carries some metres, under 60 m).
+    let glide = fly_demo(&hummel_2003_lift_drag(), &body, &release).metrics;
+    assert!((10.0..=60.0).contains(&glide.carry_m) && glide.landing_lateral_m.abs() < 1e-9);
+}
