@@ -30,8 +30,8 @@ impl ErrorReport {
 fn position_lines(code: &str, error: &CellError) -> Vec<String> {
     let Some(line) = error.line else { return Vec::new() };
     let mut lines = vec![match error.column {
-        Some(column) => format!("  at line {line}, column {column} of the cell"),
-        None => format!("  at line {line} of the cell"),
+        Some(column) => format!("  at line {line}, column {column}"),
+        None => format!("  at line {line}"),
     }];
     if let Some(source) = code.lines().nth(line.saturating_sub(1)) {
         let gutter = format!("{line:>4} | ");
@@ -53,7 +53,7 @@ mod tests {
         let error = CellError { kind: "RuntimeError".into(), message: "boom".into(), line: Some(2), column: Some(5) };
         let report = ErrorReport::from_cell("let a = 1;\nlet b = nope;", &error);
         assert_eq!(report.ename, "RuntimeError");
-        assert_eq!(report.traceback[1], "  at line 2, column 5 of the cell");
+        assert_eq!(report.traceback[1], "  at line 2, column 5");
         assert_eq!(report.traceback[2], "   2 | let b = nope;");
         assert_eq!(report.traceback[3], "           ^");
     }
