@@ -24,7 +24,8 @@ fn standard_rows() -> Vec<Value> {
     for altitude_m in ALTITUDES_M {
         for offset_k in OFFSETS_K {
             for humidity_pct in HUMIDITIES_PCT {
-                let spec = AirSpec::standard_with_offset(altitude_m, offset_k).with_relative_humidity_pct(humidity_pct);
+                let spec = AirSpec::standard_with_offset(altitude_m, offset_k)
+                    .with_relative_humidity_pct(humidity_pct);
                 rows.push(row(&spec));
             }
         }

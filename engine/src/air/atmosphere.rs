@@ -36,7 +36,8 @@ pub fn isa_pressure_pa(altitude_m: f64) -> f64 {
     }
     let tropopause_temperature_k = isa_temperature_k(ISA_TROPOPAUSE_ALTITUDE_M);
     let scale_height_m = DRY_AIR_GAS_CONSTANT_J_KG_K * tropopause_temperature_k / STANDARD_GRAVITY_MPS2;
-    troposphere_pressure_pa(ISA_TROPOPAUSE_ALTITUDE_M) * (-(altitude_m - ISA_TROPOPAUSE_ALTITUDE_M) / scale_height_m).exp()
+    troposphere_pressure_pa(ISA_TROPOPAUSE_ALTITUDE_M)
+        * (-(altitude_m - ISA_TROPOPAUSE_ALTITUDE_M) / scale_height_m).exp()
 }
 
 fn troposphere_pressure_pa(altitude_m: f64) -> f64 {

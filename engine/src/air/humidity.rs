@@ -29,7 +29,8 @@ pub fn buck_enhancement_factor(pressure_pa: f64) -> f64 {
 /// ρ = (p − e)/(R_d T) + e/(R_v T).
 pub fn humid_air_density_kg_m3(pressure_pa: f64, temperature_k: f64, vapour_pressure_pa: f64) -> f64 {
     let dry_pa = pressure_pa - vapour_pressure_pa;
-    dry_pa / (DRY_AIR_GAS_CONSTANT_J_KG_K * temperature_k) + vapour_pressure_pa / (WATER_VAPOUR_GAS_CONSTANT_J_KG_K * temperature_k)
+    dry_pa / (DRY_AIR_GAS_CONSTANT_J_KG_K * temperature_k)
+        + vapour_pressure_pa / (WATER_VAPOUR_GAS_CONSTANT_J_KG_K * temperature_k)
 }
 
 #[cfg(test)]

@@ -22,7 +22,12 @@ impl AirProperties {
     /// Dry air at sea level in the International Standard Atmosphere (ISO 2533:1975):
     /// 1.2250 kg/m³, 1.7894×10⁻⁵ Pa·s, 288.15 K, 101 325 Pa.
     pub fn sea_level_standard() -> Self {
-        Self { density_kg_m3: 1.2250, dynamic_viscosity_pa_s: 1.7894e-5, temperature_k: 288.15, pressure_pa: 101_325.0 }
+        Self {
+            density_kg_m3: 1.2250,
+            dynamic_viscosity_pa_s: 1.7894e-5,
+            temperature_k: 288.15,
+            pressure_pa: 101_325.0,
+        }
     }
 }
 

@@ -21,7 +21,13 @@ pub struct InputRangeError {
 
 impl InputRangeError {
     /// Returns `value` when it is finite and within `min ..= max`; otherwise the error.
-    pub fn check(field: &'static str, value: f64, min: f64, max: f64, unit: &'static str) -> Result<f64, Self> {
+    pub fn check(
+        field: &'static str,
+        value: f64,
+        min: f64,
+        max: f64,
+        unit: &'static str,
+    ) -> Result<f64, Self> {
         if value.is_finite() && (min..=max).contains(&value) {
             Ok(value)
         } else {
@@ -30,7 +36,12 @@ impl InputRangeError {
     }
 
     /// Like [`InputRangeError::check`], with the range as a `(min, max)` pair.
-    pub fn check_within(field: &'static str, value: f64, range: (f64, f64), unit: &'static str) -> Result<f64, Self> {
+    pub fn check_within(
+        field: &'static str,
+        value: f64,
+        range: (f64, f64),
+        unit: &'static str,
+    ) -> Result<f64, Self> {
         Self::check(field, value, range.0, range.1, unit)
     }
 

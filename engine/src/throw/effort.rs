@@ -91,7 +91,12 @@ impl DiscLoad {
         let check = InputRangeError::check_within;
         Ok(Self {
             mass_kg: check("mass_kg", mass.mass_kg, DISC_MASS_RANGE_KG, "kg")?,
-            spin_inertia_kg_m2: check("spin_inertia_kg_m2", mass.spin_inertia_kg_m2, SPIN_INERTIA_RANGE_KG_M2, "kg·m²")?,
+            spin_inertia_kg_m2: check(
+                "spin_inertia_kg_m2",
+                mass.spin_inertia_kg_m2,
+                SPIN_INERTIA_RANGE_KG_M2,
+                "kg·m²",
+            )?,
             radius_m: check("radius_m", radius_m, DISC_RADIUS_RANGE_M, "m")?,
         })
     }
@@ -146,6 +151,24 @@ impl Effort {
 
 /// A throw described as a player makes it: an effort and a pose. The same `EffortThrow` applied
 /// to two constructions gives each the release state physics says it gets.
+///
+/// ```
+/// use spinfoil_engine::{Effort, EffortThrow, IndependentEffort, MassProperties, ReleasePose};
+/// let throw = EffortThrow {
+///     effort: Effort::Independent(IndependentEffort::new(120.0, 4.0, 1.2)),
+///     pose: ReleasePose::default(),
+/// };
+/// let one_piece = MassProperties {
+///     mass_kg: 0.172,
+///     cg_height_m: 0.01,
+///     spin_inertia_kg_m2: 0.0012,
+///     transverse_inertia_kg_m2: 0.0006,
+/// };
+/// let rim_heavy = MassProperties { spin_inertia_kg_m2: 0.0048, ..one_piece };
+/// let a = throw.release(&one_piece, 0.106).unwrap();
+/// let b = throw.release(&rim_heavy, 0.106).unwrap();
+/// assert!((b.spin_rad_s - a.spin_rad_s / 2.0).abs() < 1e-9); // 4× I_z: half the spin
+/// ```
 #[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
 #[serde(deny_unknown_fields)]
 pub struct EffortThrow {

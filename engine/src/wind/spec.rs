@@ -89,7 +89,8 @@ impl WindSpec {
     /// A steady wind of `speed_mps` (m/s at 10 m) from `from_deg` (degrees, see the convention)
     /// over open short grass.
     pub fn new(speed_mps: f64, from_deg: f64) -> Self {
-        let (reference_height_m, roughness_length_m) = (default_reference_height_m(), default_roughness_length_m());
+        let (reference_height_m, roughness_length_m) =
+            (default_reference_height_m(), default_roughness_length_m());
         Self { speed_mps, from_deg, reference_height_m, roughness_length_m, gusts: None }
     }
 
@@ -125,7 +126,8 @@ impl WindSpec {
     /// Validates the settings and builds the wind field.
     pub fn build(&self) -> Result<BoundaryLayerWind, WindError> {
         let profile = self.profile()?;
-        let from_rad = InputRangeError::check_within("from_deg", self.from_deg, WIND_FROM_RANGE_DEG, "°")?.to_radians();
+        let from_rad =
+            InputRangeError::check_within("from_deg", self.from_deg, WIND_FROM_RANGE_DEG, "°")?.to_radians();
         let toward = -Vector3::new(from_rad.cos(), from_rad.sin(), 0.0);
         let across = Vector3::new(-toward.y, toward.x, 0.0);
         let gusts = self.gusts.as_ref().map(BuiltGusts::new).transpose()?;
@@ -133,9 +135,20 @@ impl WindSpec {
     }
 
     fn profile(&self) -> Result<LogProfile, WindError> {
-        let reference_speed_mps = InputRangeError::check_within("speed_mps", self.speed_mps, WIND_SPEED_RANGE_MPS, "m/s")?;
-        let reference_height_m = InputRangeError::check_within("reference_height_m", self.reference_height_m, REFERENCE_HEIGHT_RANGE_M, "m")?;
-        let roughness_length_m = InputRangeError::check_within("roughness_length_m", self.roughness_length_m, ROUGHNESS_LENGTH_RANGE_M, "m")?;
+        let reference_speed_mps =
+            InputRangeError::check_within("speed_mps", self.speed_mps, WIND_SPEED_RANGE_MPS, "m/s")?;
+        let reference_height_m = InputRangeError::check_within(
+            "reference_height_m",
+            self.reference_height_m,
+            REFERENCE_HEIGHT_RANGE_M,
+            "m",
+        )?;
+        let roughness_length_m = InputRangeError::check_within(
+            "roughness_length_m",
+            self.roughness_length_m,
+            ROUGHNESS_LENGTH_RANGE_M,
+            "m",
+        )?;
         if reference_height_m <= roughness_length_m {
             return Err(WindError::ReferenceBelowRoughness { reference_height_m, roughness_length_m });
         }
@@ -161,8 +174,14 @@ struct BuiltGusts {
 
 impl BuiltGusts {
     fn new(spec: &GustSpec) -> Result<Self, WindError> {
-        let intensity = InputRangeError::check_within("gusts.intensity", spec.intensity, GUST_INTENSITY_RANGE, "")?;
-        let lateral_ratio = InputRangeError::check_within("gusts.lateral_ratio", spec.lateral_ratio, GUST_LATERAL_RATIO_RANGE, "")?;
+        let intensity =
+            InputRangeError::check_within("gusts.intensity", spec.intensity, GUST_INTENSITY_RANGE, "")?;
+        let lateral_ratio = InputRangeError::check_within(
+            "gusts.lateral_ratio",
+            spec.lateral_ratio,
+            GUST_LATERAL_RATIO_RANGE,
+            "",
+        )?;
         let (along, across) = GustSeries::pair(spec.seed);
         Ok(Self { along, across, intensity, lateral_ratio })
     }

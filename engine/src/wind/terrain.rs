@@ -6,8 +6,10 @@ use serde::{Deserialize, Serialize};
 /// Values follow the Davenport roughness classification as revised by Wieringa (Wieringa, J.,
 /// Davenport, A. G., Grimmond, C. S. B., Oke, T. R. (2001), New revision of Davenport roughness
 /// classification, 3rd European & African Conference on Wind Engineering; reprinted in the WMO
-/// Guide to Meteorological Instruments and Methods of Observation, WMO-No. 8). The class values
-/// are quoted from memory, unverified; all are approximate by nature.
+/// Guide to Meteorological Instruments and Methods of Observation, WMO-No. 8, and in Stull,
+/// Meteorology for Scientists and Engineers, table of Davenport–Wieringa roughness lengths).
+/// Class names and values checked against that table and the WMO code list "Surface roughness
+/// (Davenport roughness classification)"; all are approximate by nature.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
 #[serde(rename_all = "snake_case")]
 pub enum Terrain {
@@ -16,7 +18,8 @@ pub enum Terrain {
     /// A field with tall grass or low crops and scattered obstacles (class "roughly open"):
     /// z0 ≈ 0.10 m.
     RoughField,
-    /// A fairway along a tree line, bushes and scattered trees (class "very rough"): z0 ≈ 0.5 m.
+    /// A fairway along a tree line, parkland with bushes and numerous obstacles (class
+    /// "very rough"): z0 ≈ 0.5 m.
     WoodedEdge,
 }
 
@@ -32,8 +35,8 @@ impl Terrain {
 
     /// Where the value comes from and how far to trust it.
     pub fn source(self) -> &'static str {
-        "approximate: Davenport classification revised by Wieringa et al. (2001), as reprinted in \
-         WMO-No. 8 (class values from memory, unverified)"
+        "approximate: Davenport roughness classification revised by Wieringa et al. (2001), \
+         as reprinted in WMO-No. 8 and Stull, Meteorology for Scientists and Engineers"
     }
 
     /// Every preset, for listings.

@@ -55,7 +55,8 @@ fn buck_saturation_vapour_pressure_at_20_c() {
 fn humid_air_is_the_ideal_gas_mixture() {
     // source: Dalton's law and the ideal-gas law; R_v = 461.5 J/(kg·K) (value from memory,
     // unverified). ρ = (p − e)/(R_d T) + e/(R_v T) with e = RH · e_s.
-    let detail = AirSpec::measured(100_000.0, 303.15).with_relative_humidity_pct(80.0).build_detailed().unwrap();
+    let detail =
+        AirSpec::measured(100_000.0, 303.15).with_relative_humidity_pct(80.0).build_detailed().unwrap();
     let e_pa = 0.8 * buck_saturation_vapour_pressure_pa(30.0);
     let expected = (100_000.0 - e_pa) / (287.05287 * 303.15) + e_pa / (461.5 * 303.15);
     assert!(rel_diff(detail.vapour_pressure_pa, e_pa) < 1e-12);
@@ -67,7 +68,11 @@ fn humid_air_is_the_ideal_gas_mixture() {
 fn enhancement_factor_raises_saturation_by_about_0_4_percent_at_sea_level() {
     // source: Buck (1981): f = 1.0007 + 3.46e-6 P[hPa] (value from memory, unverified)
     let plain = AirSpec::standard(0.0).with_relative_humidity_pct(100.0).build_detailed().unwrap();
-    let enhanced = AirSpec::standard(0.0).with_relative_humidity_pct(100.0).with_enhancement_factor(true).build_detailed().unwrap();
+    let enhanced = AirSpec::standard(0.0)
+        .with_relative_humidity_pct(100.0)
+        .with_enhancement_factor(true)
+        .build_detailed()
+        .unwrap();
     let ratio = enhanced.saturation_vapour_pressure_pa / plain.saturation_vapour_pressure_pa;
     assert!((ratio - (1.0007 + 3.46e-6 * 1013.25)).abs() < 1e-12);
 }
@@ -79,7 +84,10 @@ fn temperature_offset_changes_temperature_not_pressure() {
     let hot = AirSpec::standard_with_offset(1_000.0, 15.0).build().unwrap();
     assert_eq!(hot.pressure_pa, standard.pressure_pa);
     assert!(rel_diff(hot.temperature_k, standard.temperature_k + 15.0) < 1e-15);
-    assert!(rel_diff(hot.density_kg_m3, standard.density_kg_m3 * standard.temperature_k / hot.temperature_k) < 1e-12);
+    assert!(
+        rel_diff(hot.density_kg_m3, standard.density_kg_m3 * standard.temperature_k / hot.temperature_k)
+            < 1e-12
+    );
 }
 
 #[test]
@@ -123,7 +131,12 @@ fn air_spec_round_trips_through_json_and_rejects_unknown_fields() {
     let spec = AirSpec::standard_with_offset(800.0, -5.0).with_relative_humidity_pct(40.0);
     let json = serde_json::to_string(&spec).unwrap();
     assert_eq!(serde_json::from_str::<AirSpec>(&json).unwrap(), spec);
-    let minimal: AirSpec = serde_json::from_str(r#"{"source":{"kind":"measured","pressure_pa":95000,"temperature_k":290}}"#).unwrap();
+    let minimal: AirSpec =
+        serde_json::from_str(r#"{"source":{"kind":"measured","pressure_pa":95000,"temperature_k":290}}"#)
+            .unwrap();
     assert_eq!(minimal, AirSpec::measured(95_000.0, 290.0));
-    assert!(serde_json::from_str::<AirSpec>(r#"{"source":{"kind":"standard","altitude_m":0},"humidity":50}"#).is_err());
+    assert!(serde_json::from_str::<AirSpec>(
+        r#"{"source":{"kind":"standard","altitude_m":0},"humidity":50}"#
+    )
+    .is_err());
 }

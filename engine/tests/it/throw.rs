@@ -7,7 +7,12 @@ const RADIUS_M: f64 = 0.106;
 
 /// An invented single-material driver (demo numbers).
 fn solid_disc() -> MassProperties {
-    MassProperties { mass_kg: 0.172, cg_height_m: 0.01, spin_inertia_kg_m2: 0.00120, transverse_inertia_kg_m2: 0.00062 }
+    MassProperties {
+        mass_kg: 0.172,
+        cg_height_m: 0.01,
+        spin_inertia_kg_m2: 0.00120,
+        transverse_inertia_kg_m2: 0.00062,
+    }
 }
 
 /// The same mass with more of it in the rim (an invented overmold).
@@ -52,7 +57,8 @@ fn independent_form_follows_the_work_energy_formulas() {
     let (speed, spin) = independent().speed_and_spin(&disc, RADIUS_M).unwrap();
     assert!(rel_diff(speed, (2.0 * 120.0 / (0.172 + DEFAULT_ARM_MASS_KG)).sqrt()) < 1e-14);
     assert!(rel_diff(spin, (2.0 * 4.0 * 1.2 / 0.00120_f64).sqrt()) < 1e-14);
-    let no_arm = Effort::Independent(IndependentEffort { arm_mass_kg: 0.0, ..IndependentEffort::new(40.0, 4.0, 1.2) });
+    let no_arm =
+        Effort::Independent(IndependentEffort { arm_mass_kg: 0.0, ..IndependentEffort::new(40.0, 4.0, 1.2) });
     let (speed, _) = no_arm.speed_and_spin(&disc, RADIUS_M).unwrap();
     assert!(rel_diff(0.5 * disc.mass_kg * speed * speed, 40.0) < 1e-12);
 }
@@ -62,7 +68,8 @@ fn coupled_form_splits_the_work_exactly() {
     // source: work–energy theorem, ½mV² + ½I_zω² = W with ωR = kV (PHYSICS.md, Throws)
     for disc in [solid_disc(), rim_heavy_disc()] {
         for k in [0.0, 0.3, 0.5, 1.0] {
-            let (v, w) = Effort::Coupled(CoupledEffort::new(45.0, k)).speed_and_spin(&disc, RADIUS_M).unwrap();
+            let (v, w) =
+                Effort::Coupled(CoupledEffort::new(45.0, k)).speed_and_spin(&disc, RADIUS_M).unwrap();
             let energy_j = 0.5 * disc.mass_kg * v * v + 0.5 * disc.spin_inertia_kg_m2 * w * w;
             assert!(rel_diff(energy_j, 45.0) < 1e-12, "k = {k}: {energy_j}");
             assert!((w * RADIUS_M - k * v).abs() <= 1e-12 * v, "rim-speed ratio");
@@ -158,12 +165,32 @@ fn bad_effort_and_disc_values_name_the_field() {
     let disc = solid_disc();
     let cases = [
         (Effort::Independent(IndependentEffort::new(-5.0, 4.0, 1.0)), disc, RADIUS_M, "linear_work_j"),
-        (Effort::Independent(IndependentEffort::new(100.0, f64::NAN, 1.0)), disc, RADIUS_M, "wrist_torque_n_m"),
+        (
+            Effort::Independent(IndependentEffort::new(100.0, f64::NAN, 1.0)),
+            disc,
+            RADIUS_M,
+            "wrist_torque_n_m",
+        ),
         (Effort::Independent(IndependentEffort::new(100.0, 4.0, 9.0)), disc, RADIUS_M, "wrist_turn_rad"),
         (Effort::Coupled(CoupledEffort::new(50.0, 3.0)), disc, RADIUS_M, "rim_speed_ratio"),
-        (Effort::Coupled(CoupledEffort { arm_mass_kg: -0.1, ..CoupledEffort::new(50.0, 0.4) }), disc, RADIUS_M, "arm_mass_kg"),
-        (Effort::Coupled(CoupledEffort::new(50.0, 0.4)), MassProperties { mass_kg: 0.0, ..disc }, RADIUS_M, "mass_kg"),
-        (Effort::Coupled(CoupledEffort::new(50.0, 0.4)), MassProperties { spin_inertia_kg_m2: f64::NAN, ..disc }, RADIUS_M, "spin_inertia_kg_m2"),
+        (
+            Effort::Coupled(CoupledEffort { arm_mass_kg: -0.1, ..CoupledEffort::new(50.0, 0.4) }),
+            disc,
+            RADIUS_M,
+            "arm_mass_kg",
+        ),
+        (
+            Effort::Coupled(CoupledEffort::new(50.0, 0.4)),
+            MassProperties { mass_kg: 0.0, ..disc },
+            RADIUS_M,
+            "mass_kg",
+        ),
+        (
+            Effort::Coupled(CoupledEffort::new(50.0, 0.4)),
+            MassProperties { spin_inertia_kg_m2: f64::NAN, ..disc },
+            RADIUS_M,
+            "spin_inertia_kg_m2",
+        ),
         (Effort::Coupled(CoupledEffort::new(50.0, 0.4)), disc, 1.5, "radius_m"),
     ];
     for (effort, mass, radius_m, field) in cases {
@@ -173,7 +200,8 @@ fn bad_effort_and_disc_values_name_the_field() {
 
 #[test]
 fn an_effort_too_large_for_a_light_disc_is_rejected_by_release_speed() {
-    let throw = EffortThrow { effort: Effort::Coupled(CoupledEffort::new(900.0, 0.3)), pose: ReleasePose::default() };
+    let throw =
+        EffortThrow { effort: Effort::Coupled(CoupledEffort::new(900.0, 0.3)), pose: ReleasePose::default() };
     assert_eq!(throw.release(&solid_disc(), RADIUS_M).unwrap_err().field(), "speed_mps");
 }
 
@@ -182,10 +210,16 @@ fn throw_inputs_round_trip_through_json_with_defaults() {
     let json = r#"{"effort": {"form": "independent", "linear_work_j": 120, "wrist_torque_n_m": 4, "wrist_turn_rad": 1.2}}"#;
     let throw: EffortThrow = serde_json::from_str(json).unwrap();
     assert_eq!(throw, EffortThrow { effort: independent(), pose: ReleasePose::default() });
-    let coupled = EffortThrow { effort: Effort::Coupled(CoupledEffort::new(50.0, 0.4)), pose: ReleasePose::thrown(Style::Forehand, Hand::Right) };
+    let coupled = EffortThrow {
+        effort: Effort::Coupled(CoupledEffort::new(50.0, 0.4)),
+        pose: ReleasePose::thrown(Style::Forehand, Hand::Right),
+    };
     let text = serde_json::to_string(&coupled).unwrap();
     assert_eq!(serde_json::from_str::<EffortThrow>(&text).unwrap(), coupled);
-    assert!(serde_json::from_str::<EffortThrow>(r#"{"effort": {"form": "coupled", "work_j": 5, "rim_speed_ratio": 0.4}, "pose": {"height": 1}}"#).is_err());
+    assert!(serde_json::from_str::<EffortThrow>(
+        r#"{"effort": {"form": "coupled", "work_j": 5, "rim_speed_ratio": 0.4}, "pose": {"height": 1}}"#
+    )
+    .is_err());
 }
 
 /// Mass properties of an invented driver outline at 172 g, one-piece or with a dense rim blend
@@ -199,7 +233,8 @@ fn driver_layup_properties(rim_heavy: bool) -> (MassProperties, f64) {
     } else {
         Layup::single(base)
     };
-    let design = DiscDesign::new("test", outline, layup).with_target(MassTarget::ScaleDensities { mass_kg: 0.172 });
+    let design =
+        DiscDesign::new("test", outline, layup).with_target(MassTarget::ScaleDensities { mass_kg: 0.172 });
     (design.evaluate().unwrap().properties, outline.diameter_m / 2.0)
 }
 
@@ -212,6 +247,7 @@ fn from_the_same_effort_a_rim_heavy_layup_spins_slower_with_more_angular_momentu
     let throw = EffortThrow { effort: independent(), pose: ReleasePose::default() };
     let (a, b) = (throw.release(&solid, radius_m).unwrap(), throw.release(&overmold, radius_m).unwrap());
     assert!(rel_diff(b.spin_rad_s / a.spin_rad_s, inertia_ratio.powf(-0.5)) < 1e-9);
-    let momentum_ratio = overmold.spin_inertia_kg_m2 * b.spin_rad_s / (solid.spin_inertia_kg_m2 * a.spin_rad_s);
+    let momentum_ratio =
+        overmold.spin_inertia_kg_m2 * b.spin_rad_s / (solid.spin_inertia_kg_m2 * a.spin_rad_s);
     assert!(rel_diff(momentum_ratio, inertia_ratio.sqrt()) < 1e-9);
 }
