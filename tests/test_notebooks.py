@@ -1,0 +1,106 @@
+"""Every notebook in notebooks/ runs in Jupyter (nbclient, PyPI) with the Spinfoil kernel, and
+the headless runner (`spinfoil report`, no Jupyter) produces the same outputs and an HTML report.
+"""
+import copy
+
+import nbformat
+import pytest
+from nbclient import NotebookClient
+
+from kernel_support import NOTEBOOKS, install_kernelspec, run_spinfoil
+
+SAFETY = "Keep clear of the throwing lane"
+
+
+@pytest.fixture(scope="module", autouse=True)
+def kernelspec():
+    install_kernelspec()
+
+
+def run_with_nbclient(path):
+    notebook = nbformat.read(path, as_version=4)
+    NotebookClient(notebook, kernel_name="spinfoil", timeout=120, allow_errors=False).execute()
+    return notebook
+
+
+def run_headless(path, out_dir):
+    done = run_spinfoil("report", str(path), "--out", str(out_dir))
+    assert done.returncode == 0, done.stderr
+    return nbformat.read(out_dir / f"{path.stem}.ipynb", as_version=4), (out_dir / f"{path.stem}.html").read_text()
+
+
+def comparable(notebook):
+    """Cells with their outputs, without ids, timing and execution metadata; streams merged."""
+    cells = []
+    for cell in notebook.cells:
+        entry = {"cell_type": cell.cell_type, "source": cell.source}
+        if cell.cell_type == "code":
+            entry["execution_count"] = cell.execution_count
+            entry["outputs"] = merge_streams([strip(o) for o in cell.outputs])
+        cells.append(entry)
+    return cells
+
+
+def strip(output):
+    output = copy.deepcopy(dict(output))
+    output.pop("metadata", None)
+    output.pop("transient", None)
+    return output
+
+
+def merge_streams(outputs):
+    merged = []
+    for output in outputs:
+        previous = merged[-1] if merged else None
+        if previous and output["output_type"] == "stream" and previous["output_type"] == "stream" and previous["name"] == output["name"]:
+            previous["text"] += output["text"]
+        else:
+            merged.append(output)
+    return merged
+
+
+def all_outputs(notebook):
+    return [o for c in notebook.cells if c.cell_type == "code" for o in c.outputs]
+
+
+def test_there_are_demo_notebooks():
+    assert NOTEBOOKS, "notebooks/ holds no .ipynb"
+
+
+@pytest.mark.parametrize("path", NOTEBOOKS, ids=lambda p: p.name)
+def test_notebook_runs_in_jupyter_with_tables(path):
+    notebook = run_with_nbclient(path)
+    outputs = all_outputs(notebook)
+    assert not [o for o in outputs if o.output_type == "error"]
+    assert any("<table" in o.get("data", {}).get("text/html", "") for o in outputs), "no HTML table"
+    if "chart" in path.read_text():
+        assert any("image/svg+xml" in o.get("data", {}) for o in outputs), "no SVG chart"
+
+
+@pytest.mark.parametrize("path", NOTEBOOKS, ids=lambda p: p.name)
+def test_headless_runner_matches_jupyter(path, tmp_path):
+    in_jupyter = run_with_nbclient(path)
+    headless, html = run_headless(path, tmp_path)
+    assert comparable(headless) == comparable(in_jupyter)
+    nbformat.validate(headless)
+    assert "<table" in html and SAFETY in html
+    assert html.count("<svg") >= sum("image/svg+xml" in o.get("data", {}) for o in all_outputs(headless))
+
+
+def test_a_failing_notebook_stops_with_exit_code_1_and_keeps_the_error(tmp_path):
+    notebook = nbformat.v4.new_notebook()
+    notebook.cells = [
+        nbformat.v4.new_code_cell('print("before")'),
+        nbformat.v4.new_code_cell("let d = disc();"),
+        nbformat.v4.new_code_cell('print("never")'),
+    ]
+    path = tmp_path / "broken.ipynb"
+    nbformat.write(notebook, path)
+    done = run_spinfoil("report", str(path), "--out", str(tmp_path / "out"))
+    assert done.returncode == 1
+    executed = nbformat.read(tmp_path / "out" / "broken.ipynb", as_version=4)
+    error = executed.cells[1].outputs[-1]
+    assert error.output_type == "error"
+    assert any("at line 1" in line for line in error.traceback)
+    assert executed.cells[2].outputs == []
+    assert "cell 2 failed" in done.stderr
