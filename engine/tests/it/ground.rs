@@ -1,1 +1,295 @@
-//! Integration tests: ground.
+//! Integration tests: ground (surfaces, rim contact, impacts, ground play until rest).
+use nalgebra::Vector3;
+use rand::{Rng, SeedableRng};
+use rand_chacha::ChaCha8Rng;
+use spinfoil_engine::{
+    lowest_rim_point, play_out_landing, resolve_impact, ContactBody, ContactState, Ground, GroundEnding, GroundError,
+    GroundPhase, GroundPlane, GroundPlay, GroundSettings, Surface, SurfacePreset, STANDARD_GRAVITY_MPS2,
+};
+
+use crate::common::rel_diff;
+
+const G: f64 = STANDARD_GRAVITY_MPS2;
+
+/// An invented 175 g disc of 21.1 cm diameter (demo values, not a product).
+fn disc() -> ContactBody {
+    ContactBody::new(0.175, 1.30e-3, 0.70e-3, 0.1055).expect("valid demo disc")
+}
+
+/// A unit axis tilted `tilt_rad` from vertical toward the horizontal azimuth `azimuth_rad`.
+fn tilted_axis(tilt_rad: f64, azimuth_rad: f64) -> Vector3<f64> {
+    Vector3::new(tilt_rad.sin() * azimuth_rad.cos(), tilt_rad.sin() * azimuth_rad.sin(), tilt_rad.cos())
+}
+
+/// A landing state whose lowest rim point just touches level ground at z = 0.
+fn landing(velocity: Vector3<f64>, axis: Vector3<f64>, spin_rad_s: f64) -> ContactState {
+    let body = disc();
+    let plane = GroundPlane::default();
+    let n = axis.normalize();
+    let rim = lowest_rim_point(&plane, &Vector3::zeros(), &n, body.radius_m);
+    let state = ContactState {
+        position_m: Vector3::new(0.0, 0.0, -rim.gap_m),
+        velocity_mps: velocity,
+        normal: n,
+        angular_velocity_rad_s: n * spin_rad_s,
+    };
+    state.validated().expect("valid landing")
+}
+
+fn play(ground: &Ground, state: &ContactState) -> GroundPlay {
+    play_out_landing(&disc(), ground, state, &GroundSettings::default()).expect("ground play succeeds")
+}
+
+fn all_surfaces() -> Vec<Surface> {
+    let mut surfaces: Vec<Surface> = SurfacePreset::ALL.iter().map(|p| p.surface()).collect();
+    for (friction, restitution) in [(0.0, 1.0), (0.0, 0.0), (2.0, 1.0), (2.0, 0.0), (1.0, 0.5)] {
+        surfaces.push(Surface::new(friction, restitution, 0.1).expect("valid extreme surface"));
+    }
+    surfaces
+}
+
+fn random_landing(rng: &mut ChaCha8Rng) -> ContactState {
+    let axis = tilted_axis(rng.gen_range(0.0..1.5), rng.gen_range(0.0..std::f64::consts::TAU));
+    let heading: f64 = rng.gen_range(0.0..std::f64::consts::TAU);
+    let speed: f64 = rng.gen_range(0.0..25.0);
+    let velocity = Vector3::new(speed * heading.cos(), speed * heading.sin(), -rng.gen_range(0.1..10.0));
+    let mut state = landing(velocity, axis, rng.gen_range(-150.0..150.0));
+    let wobble = Vector3::new(rng.gen_range(-15.0..15.0), rng.gen_range(-15.0..15.0), rng.gen_range(-15.0..15.0));
+    state.angular_velocity_rad_s += wobble - axis * wobble.dot(&axis);
+    state
+}
+
+#[test]
+fn energy_never_increases_across_an_impact_for_every_surface() {
+    // source: physics law (work–energy theorem; Coulomb friction and restitution only dissipate).
+    let body = disc();
+    let plane = GroundPlane::default();
+    let mut rng = ChaCha8Rng::seed_from_u64(20261201);
+    for surface in all_surfaces() {
+        let mut impacts = 0;
+        while impacts < 1000 {
+            let state = random_landing(&mut rng);
+            let rim = lowest_rim_point(&plane, &state.position_m, &state.normal, body.radius_m);
+            let out = resolve_impact(&body, &state, &rim.arm_m, &plane.normal(), &surface, 0.0).expect("impact resolves");
+            if !out.approaching {
+                assert_eq!(out.energy_after_j, out.energy_before_j, "a separating contact must not change anything");
+                continue;
+            }
+            impacts += 1;
+            let tolerance = 1e-12 * out.energy_before_j + 1e-15;
+            assert!(
+                out.energy_after_j <= out.energy_before_j + tolerance,
+                "{}: energy rose from {} J to {} J",
+                surface.name(),
+                out.energy_before_j,
+                out.energy_after_j
+            );
+            // The contact point no longer moves into the ground (rigid, non-penetrating).
+            assert!(out.contact_velocity_mps.z >= -1e-9, "contact still approaching: {}", out.contact_velocity_mps.z);
+        }
+    }
+}
+
+/// The apex height (m) of the first rebound after the first impact.
+fn first_rebound_apex_m(play: &GroundPlay) -> f64 {
+    let first = play.samples.iter().position(|s| s.phase == GroundPhase::Impact).expect("an impact");
+    play.samples[first + 1..]
+        .iter()
+        .take_while(|s| s.phase == GroundPhase::Airborne)
+        .map(|s| s.position_m.z)
+        .fold(f64::NEG_INFINITY, f64::max)
+}
+
+#[test]
+fn flat_drop_rebounds_to_e_squared_of_drop_height() {
+    // source: Meriam & Kraige, Engineering Mechanics: Dynamics, direct central impact
+    // (rebound speed e·v, so rebound height e²·h).
+    let drop_m = 1.0;
+    for surface in all_surfaces().into_iter().filter(|s| s.restitution() >= 0.1) {
+        let start = ContactState {
+            position_m: Vector3::new(0.0, 0.0, drop_m),
+            velocity_mps: Vector3::zeros(),
+            normal: Vector3::z(),
+            angular_velocity_rad_s: Vector3::zeros(),
+        };
+        let result = play(&Ground::new(GroundPlane::default(), surface.clone()), &start);
+        let expected = surface.restitution().powi(2) * drop_m;
+        let apex = first_rebound_apex_m(&result);
+        assert!(rel_diff(apex, expected) < 0.01, "{}: rebound {apex} m, expected {expected} m", surface.name());
+    }
+}
+
+#[test]
+fn flat_slide_stops_after_v_squared_over_two_mu_g() {
+    // source: textbook Coulomb friction kinematics (constant deceleration μg: s = v²/(2μg)),
+    // e.g. Meriam & Kraige, Engineering Mechanics: Dynamics, rectilinear motion.
+    let speed = 8.0;
+    for preset in SurfacePreset::ALL {
+        let ground = Ground::level(preset);
+        let start = landing(Vector3::new(speed * 0.6, speed * 0.8, 0.0), Vector3::z(), 0.0);
+        let result = play(&ground, &start);
+        let expected = speed * speed / (2.0 * ground.surface.friction() * G);
+        assert_eq!(result.ending, GroundEnding::Slid);
+        assert!(rel_diff(result.ground_play_m, expected) < 0.01, "{preset:?}: {} m vs {expected} m", result.ground_play_m);
+        assert!(rel_diff(result.time_to_rest_s, speed / (ground.surface.friction() * G)) < 0.01);
+    }
+}
+
+#[test]
+fn flat_slide_down_a_slope_stops_after_textbook_incline_distance() {
+    // source: textbook block on an incline with Coulomb friction, deceleration
+    // g(μ cos α − sin α), e.g. Meriam & Kraige, Engineering Mechanics: Dynamics.
+    let slope = 10f64.to_radians();
+    let plane = GroundPlane::new(0.0, slope, 0.0).expect("valid slope");
+    let ground = Ground::new(plane, SurfacePreset::ShortGrass);
+    let speed = 5.0;
+    let downhill = Vector3::new(slope.cos(), 0.0, -slope.sin());
+    let start = ContactState {
+        position_m: Vector3::zeros(),
+        velocity_mps: downhill * speed,
+        normal: plane.normal(),
+        angular_velocity_rad_s: Vector3::zeros(),
+    };
+    let result = play(&ground, &start);
+    let along = speed * speed / (2.0 * G * (0.5 * slope.cos() - slope.sin()));
+    assert!(rel_diff(result.ground_play_m, along * slope.cos()) < 0.01, "{} m vs {} m", result.ground_play_m, along * slope.cos());
+}
+
+#[test]
+fn lowest_rim_point_matches_a_sampled_rim_on_a_slope() {
+    // source: common practice, no published source (brute-force minimum over the rim circle).
+    let plane = GroundPlane::new(0.3, 20f64.to_radians(), 2.0).expect("valid slope");
+    let centre = Vector3::new(1.0, -2.0, 0.5);
+    let n = tilted_axis(0.7, -1.1);
+    let radius = 0.1055;
+    let contact = lowest_rim_point(&plane, &centre, &n, radius);
+    let e1 = n.cross(&Vector3::x()).normalize();
+    let e2 = n.cross(&e1);
+    let sampled = (0..100_000)
+        .map(|i| {
+            let phi = std::f64::consts::TAU * i as f64 / 100_000.0;
+            plane.distance_m(&(centre + (e1 * phi.cos() + e2 * phi.sin()) * radius))
+        })
+        .fold(f64::INFINITY, f64::min);
+    assert!((contact.gap_m - sampled).abs() < 1e-8, "{} vs {}", contact.gap_m, sampled);
+    assert!((plane.distance_m(&(centre + contact.arm_m)) - contact.gap_m).abs() < 1e-12);
+}
+
+/// A nose-down landing with spin `spin_rad_s`, heading downrange.
+fn nose_down_landing(spin_rad_s: f64) -> ContactState {
+    landing(Vector3::new(14.0, 0.0, -3.0), tilted_axis(20f64.to_radians(), 0.0), spin_rad_s)
+}
+
+#[test]
+fn spin_direction_decides_the_skip_side() {
+    // source: physics law (mirror symmetry: reflecting y reverses the spin, an axial vector).
+    let ground = Ground::level(SurfacePreset::HardCourt);
+    let backhand = play(&ground, &nose_down_landing(-80.0)); // right-hand backhand: ω_s < 0
+    let forehand = play(&ground, &nose_down_landing(80.0)); // right-hand forehand: ω_s > 0
+    assert!(backhand.skips >= 1, "expected a skip, got {}", backhand.describe());
+    let (left, right) = (backhand.displacement_m().y, forehand.displacement_m().y);
+    assert!(left.abs() > 0.05, "lateral skip too small: {left} m");
+    assert!(rel_diff(-right, left) < 1e-9, "backhand {left} m, forehand {right} m");
+    assert!((backhand.displacement_m().x - forehand.displacement_m().x).abs() < 1e-9 * backhand.ground_play_m);
+}
+
+#[test]
+fn more_residual_spin_gives_more_ground_play_on_edge_landings() {
+    // source: common practice, no published source (spin at the rim is turned into ground
+    // travel by friction; CHECKS.md: a disc that "lands with more spin" has "more ground play").
+    let ground = Ground::level(SurfacePreset::ShortGrass);
+    let edge_low_left = tilted_axis(0.8, std::f64::consts::FRAC_PI_2); // hyzer for a right-hand backhand
+    let edge_low_right = tilted_axis(0.8, -std::f64::consts::FRAC_PI_2); // anhyzer for it
+    for axis in [edge_low_left, edge_low_right] {
+        let plays: Vec<f64> = (0..=8)
+            .map(|i| play(&ground, &landing(Vector3::new(10.0, 0.0, -2.5), axis, -15.0 * i as f64)).ground_play_m)
+            .collect();
+        assert!(plays.windows(2).all(|w| w[1] > w[0]), "ground play not increasing with spin: {plays:?}");
+        assert!(plays[8] > 1.3 * plays[0], "spin should matter: {plays:?}");
+    }
+}
+
+#[test]
+fn upright_landing_with_spin_rolls_the_textbook_distance() {
+    // source: textbook rolling wheel: sliding-to-rolling speed from angular momentum about the
+    // contact, then deceleration c_rr g / (1 + I/(mR²)); e.g. Meriam & Kraige, Dynamics.
+    let body = disc();
+    let ground = Ground::level(SurfacePreset::PackedDirt);
+    let axis = Vector3::new(0.0, 1.0, 0.0); // on edge, top facing left, rolling downrange
+    let spin = 40.0; // ω = 40 ŷ: the bottom of the rim moves backward, so the disc rolls forward
+    let start = landing(Vector3::new(0.0, 0.0, -0.05), axis, spin);
+    let result = play(&ground, &start);
+    assert_eq!(result.ending, GroundEnding::Rolled);
+    let ratio = body.spin_inertia_kg_m2 / (body.mass_kg * body.radius_m.powi(2));
+    let roll_speed = -spin * body.radius_m * ratio / (1.0 + ratio);
+    let expected = roll_speed.powi(2) / (2.0 * ground.surface.rolling_resistance() * G / (1.0 + ratio));
+    assert!(rel_diff(result.ground_play_m, expected) < 0.01, "{} m vs {expected} m", result.ground_play_m);
+    assert!(result.displacement_m().x > 0.0);
+}
+
+#[test]
+fn spinning_flat_disc_slides_further_than_a_still_one() {
+    // source: Farkas, Bartels, Unger & Wolf (2003), Frictional coupling between sliding and
+    // spinning motion, Phys. Rev. Lett. 90, 248302 (spin lowers the sliding deceleration).
+    let ground = Ground::level(SurfacePreset::ShortGrass);
+    let still = play(&ground, &landing(Vector3::new(6.0, 0.0, 0.0), Vector3::z(), 0.0));
+    let spinning = play(&ground, &landing(Vector3::new(6.0, 0.0, 0.0), Vector3::z(), -60.0));
+    assert!(spinning.ground_play_m > 1.05 * still.ground_play_m);
+    assert!(spinning.displacement_m().y.abs() < 1e-6 * spinning.ground_play_m, "a uniform ring must not curve");
+}
+
+#[test]
+fn bad_surface_and_slope_values_are_typed_errors() {
+    assert!(matches!(Surface::new(-0.1, 0.5, 0.0), Err(GroundError::FrictionOutOfRange { .. })));
+    assert!(matches!(Surface::new(0.5, 1.2, 0.0), Err(GroundError::RestitutionOutOfRange { .. })));
+    assert!(matches!(Surface::new(0.5, -0.01, 0.0), Err(GroundError::RestitutionOutOfRange { .. })));
+    assert!(matches!(Surface::new(0.5, 0.5, -1.0), Err(GroundError::RollingResistanceOutOfRange { .. })));
+    assert!(matches!(Surface::new(f64::NAN, 0.5, 0.0), Err(GroundError::NotFinite { .. })));
+    let steep = GroundPlane::new(0.0, 35f64.to_radians(), 0.0).expect_err("35° is too steep");
+    assert!(matches!(steep, GroundError::SlopeTooSteep { .. }));
+    assert!(steep.to_string().contains("30"), "message should state the limit: {steep}");
+    assert!(GroundPlane::new(0.0, 30f64.to_radians(), 0.0).is_ok());
+    assert!(matches!(GroundPlane::new(f64::INFINITY, 0.1, 0.0), Err(GroundError::NotFinite { .. })));
+    let message = Surface::new(0.5, 1.5, 0.0).expect_err("out of range").to_string();
+    assert!(message.contains("1.5") && message.contains("[0, 1]"), "{message}");
+}
+
+#[test]
+fn bad_values_in_files_are_rejected_when_read() {
+    let bad_friction = r#"{"surface": {"friction": -0.2, "restitution": 0.3}}"#;
+    assert!(serde_json::from_str::<Ground>(bad_friction).is_err());
+    let steep = r#"{"plane": {"slope_rad": 1.0}, "surface": {"friction": 0.2, "restitution": 0.3}}"#;
+    assert!(serde_json::from_str::<Ground>(steep).is_err());
+    let good = Ground::new(GroundPlane::new(0.5, 0.1, 1.0).expect("valid"), SurfacePreset::Sand);
+    let text = serde_json::to_string(&good).expect("serialises");
+    assert_eq!(serde_json::from_str::<Ground>(&text).expect("reads back"), good);
+}
+
+#[test]
+fn non_finite_landing_states_are_typed_errors_not_panics() {
+    let ground = Ground::level(SurfacePreset::ShortGrass);
+    let settings = GroundSettings::default();
+    let mut state = landing(Vector3::new(10.0, 0.0, -2.0), Vector3::z(), -50.0);
+    state.velocity_mps.x = f64::NAN;
+    assert!(matches!(play_out_landing(&disc(), &ground, &state, &settings), Err(GroundError::NotFinite { .. })));
+    let mut state = landing(Vector3::new(10.0, 0.0, -2.0), Vector3::z(), -50.0);
+    state.normal = Vector3::zeros();
+    assert!(matches!(play_out_landing(&disc(), &ground, &state, &settings), Err(GroundError::ZeroAxis { .. })));
+    let state = landing(Vector3::new(10.0, 0.0, -2.0), Vector3::z(), -50.0);
+    let bad_body = ContactBody { mass_kg: f64::NAN, ..disc() };
+    assert!(play_out_landing(&bad_body, &ground, &state, &settings).is_err());
+}
+
+#[test]
+fn random_landings_always_come_to_rest_with_finite_results() {
+    // source: physics law (energy only leaves the disc, so every landing on level ground ends).
+    let mut rng = ChaCha8Rng::seed_from_u64(7);
+    for i in 0..100 {
+        let preset = SurfacePreset::ALL[i % SurfacePreset::ALL.len()];
+        let result = play(&Ground::level(preset), &random_landing(&mut rng));
+        assert_ne!(result.ending, GroundEnding::Unsettled, "{preset:?}: {}", result.describe());
+        assert!(result.ground_play_m.is_finite() && result.time_to_rest_s.is_finite());
+        assert!(result.samples.windows(2).all(|w| w[1].time_s >= w[0].time_s), "samples out of order");
+        assert!(result.rest_state.kinetic_energy_j(&disc()) == 0.0);
+    }
+}
