@@ -66,3 +66,16 @@ fn wobble_cones_at_the_textbook_rates() {
     // a flat disc (I₃ ≈ 2 I₁) wobbles at about twice its spin rate (CHECKS.md)
     assert!((cone_rate / omega3 - 2.0).abs() < 0.1);
 }
+
+#[test]
+fn release_wobble_decays_through_aerodynamic_damping() {
+    // common practice, no published source (PHYSICS.md: wobble decays through aerodynamic
+    // damping): pitch- and roll-damping moments oppose the transverse rates
+    let body = hummel_body();
+    let mut r = release(22.0, 90.0, 0.15, 0.03, 0.0);
+    r.off_axis_rate_rad_s = 10.0;
+    let flight = fly(&body, &LinearTestModel, &r, &conditions(STANDARD_GRAVITY_MPS2), &FlightSettings::default()).unwrap();
+    let at = |t: f64| flight.samples.iter().find(|s| s.time_s >= t).unwrap().wobble_rad;
+    assert!(at(0.0) > 0.05);
+    assert!(at(1.0) < 0.2 * at(0.0), "{} → {}", at(0.0), at(1.0));
+}
