@@ -32,7 +32,7 @@ fn designs() -> Result<Vec<DiscDesign>, MassError> {
     Ok(vec![
         DiscDesign::new("Kestrel one-piece", outline, Layup::single(base.clone())).with_target(scale),
         DiscDesign::new("Kestrel overmold", outline, overmold).with_target(scale),
-        DiscDesign::new("Kestrel one-piece, plate solved", outline, Layup::single(base)).with_target(solve),
+        DiscDesign::new("Kestrel plate-solved", outline, Layup::single(base)).with_target(solve),
     ])
 }
 
@@ -44,20 +44,20 @@ fn run() -> Result<(), MassError> {
     print_regions(&reports);
     print_ratio(&reports);
     print_targets(&reports);
-    print_warnings(&reports);
+    print_standard(&reports);
     Ok(())
 }
 
 fn print_properties(reports: &[DesignReport]) {
     println!("Mass properties (about the centre of mass; z up from the rim bottom)");
     println!(
-        "{:<32} {:>8} {:>9} {:>11} {:>11} {:>8} {:>8} {:>7}",
+        "{:<24} {:>8} {:>9} {:>11} {:>11} {:>8} {:>8} {:>7}",
         "design", "mass g", "CG z mm", "I_z g·cm²", "I_x g·cm²", "k_z mm", "k_x mm", "I_z/I_x"
     );
     for r in reports {
         let p = &r.properties;
         println!(
-            "{:<32} {:>8.2} {:>9.3} {:>11.1} {:>11.1} {:>8.2} {:>8.2} {:>7.3}",
+            "{:<24} {:>8.2} {:>9.3} {:>11.1} {:>11.1} {:>8.2} {:>8.2} {:>7.3}",
             r.name,
             p.mass_kg * 1e3,
             p.cg_height_m * 1e3,
@@ -74,13 +74,13 @@ fn print_properties(reports: &[DesignReport]) {
 fn print_regions(reports: &[DesignReport]) {
     println!("Regions");
     println!(
-        "{:<32} {:<7} {:<16} {:>8} {:>8} {:>8} {:>7}",
+        "{:<24} {:<7} {:<16} {:>8} {:>8} {:>8} {:>7}",
         "design", "region", "material", "ρ g/cm³", "mass g", "mass %", "I_z %"
     );
     for r in reports {
         for s in &r.regions {
             println!(
-                "{:<32} {:<7} {:<16} {:>8.4} {:>8.2} {:>8.1} {:>7.1}",
+                "{:<24} {:<7} {:<16} {:>8.4} {:>8.2} {:>8.1} {:>7.1}",
                 r.name,
                 s.name,
                 s.material,
@@ -123,20 +123,45 @@ fn print_targets(reports: &[DesignReport]) {
                 designed_mass_kg * 1e3
             ),
         };
-        println!("  {:<32} {how}", r.name);
+        println!("  {:<24} {how}", r.name);
     }
     println!();
 }
 
-fn print_warnings(reports: &[DesignReport]) {
-    println!("Technical standard (warnings only; limits from memory, unverified)");
+fn print_standard(reports: &[DesignReport]) {
+    println!("Technical standard (checks are warnings, never errors; limits from memory, unverified)");
+    print!("{:<48} {:>10}", "rule", "limit");
     for r in reports {
-        let warnings = r.warnings();
-        if warnings.is_empty() {
-            println!("  {:<32} all {} checked rules pass", r.name, r.standard.len());
+        print!(" {:>16}", short_label(&r.name));
+    }
+    println!();
+    for (row, check) in reports[0].standard.iter().enumerate() {
+        print!("{:<48} {:>10}", check.title, format!("{:.2} {}", check.limit, short_unit(&check.unit)));
+        for r in reports {
+            let c = &r.standard[row];
+            let flag = if c.passed { "" } else { " !" };
+            print!(" {:>16}", format!("{:.2} ({:+.2}){flag}", c.value, c.margin));
         }
-        for w in warnings {
-            println!("  {:<32} {w}", r.name);
+        println!();
+    }
+    println!("values (margin inside the limit) in the limit's unit; ! marks a failed rule");
+    for r in reports {
+        for w in r.warnings() {
+            println!("WARNING {}: {w}", r.name);
         }
     }
+    let mut sources: Vec<&str> = reports[0].standard.iter().map(|c| c.source.as_str()).collect();
+    sources.sort_unstable();
+    sources.dedup();
+    for source in sources {
+        println!("source: {source}");
+    }
+}
+
+fn short_label(name: &str) -> &str {
+    name.strip_prefix("Kestrel ").unwrap_or(name)
+}
+
+fn short_unit(unit: &str) -> &str {
+    if unit == "% of diameter" { "%" } else { unit }
 }

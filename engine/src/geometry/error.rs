@@ -22,6 +22,18 @@ pub enum GeometryError {
         /// Its height, m.
         z_m: f64,
     },
+    /// A coordinate is beyond any disc's size.
+    #[error("point {index} of the outline (r = {r_m} m, z = {z_m} m) lies outside the allowed range: |r| and |z| at most {limit_m} m")]
+    CoordinateOutOfRange {
+        /// Index of the point (0-based).
+        index: usize,
+        /// Its radius, m.
+        r_m: f64,
+        /// Its height, m.
+        z_m: f64,
+        /// Largest allowed |r| and |z|, m.
+        limit_m: f64,
+    },
     /// A point lies on the far side of the symmetry axis.
     #[error("point {index} of the outline has r = {r_m} m; radii must be ≥ 0 (the outline lies in the half-plane r ≥ 0)")]
     NegativeRadius {

@@ -17,7 +17,7 @@ pub(crate) mod triangulate;
 pub use dimension::Dimension;
 pub use error::GeometryError;
 pub use family::DiscFamily;
-pub use outline::{DeclaredDimensions, Outline};
+pub use outline::{DeclaredDimensions, Outline, MAX_COORDINATE_M};
 pub(crate) use outline::checked_polygon;
 pub use parametric::ParametricOutline;
 pub use point::RzPoint;

@@ -75,12 +75,14 @@ impl From<Outline> for OutlineData {
     }
 }
 
+/// Largest |r| or |z| of an outline point, m.
+pub const MAX_COORDINATE_M: f64 = 10.0;
 /// Smallest enclosed area accepted, m² (1e-12 m² = 1 µm²).
 const MIN_AREA_M2: f64 = 1e-12;
 
 impl Outline {
     /// An outline from its points (m). Closing the polygon by repeating the first point is
-    /// optional. Checked: at least 3 distinct points, all finite, every r ≥ 0, no
+    /// optional. Checked: at least 3 distinct points, all finite and within ±10 m, every r ≥ 0, no
     /// self-intersection, positive area. A clockwise polygon is reversed.
     pub fn from_points(points: Vec<RzPoint>) -> Result<Self, GeometryError> {
         let mut points = checked_polygon(&points)?;
@@ -200,6 +202,9 @@ pub(crate) fn checked_polygon(points: &[RzPoint]) -> Result<Vec<RzPoint>, Geomet
     for (index, p) in points.iter().enumerate() {
         if !p.is_finite() {
             return Err(GeometryError::NotFinite { index, r_m: p.r_m, z_m: p.z_m });
+        }
+        if p.r_m.abs() > MAX_COORDINATE_M || p.z_m.abs() > MAX_COORDINATE_M {
+            return Err(GeometryError::CoordinateOutOfRange { index, r_m: p.r_m, z_m: p.z_m, limit_m: MAX_COORDINATE_M });
         }
         if p.r_m < 0.0 {
             return Err(GeometryError::NegativeRadius { index, r_m: p.r_m });

@@ -7,13 +7,13 @@ use thiserror::Error;
 #[non_exhaustive]
 pub enum LayupError {
     /// A density is zero, negative, NaN or beyond any solid.
-    #[error("material '{material}' has density {density_kg_m3} kg/m³ ({} g/cm³); allowed range is ({min_kg_m3}, {max_kg_m3}] kg/m³", .density_kg_m3 / 1000.0)]
+    #[error("material '{material}' has density {density_kg_m3} kg/m³ ({} g/cm³); allowed range is [{min_kg_m3}, {max_kg_m3}] kg/m³", .density_kg_m3 / 1000.0)]
     DensityOutOfRange {
         /// Material name.
         material: String,
         /// Given density, kg/m³.
         density_kg_m3: f64,
-        /// Lower bound (exclusive), kg/m³.
+        /// Lower bound, kg/m³.
         min_kg_m3: f64,
         /// Upper bound (inclusive), kg/m³.
         max_kg_m3: f64,

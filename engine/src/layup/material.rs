@@ -12,17 +12,19 @@ pub struct Material {
 }
 
 impl Material {
+    /// Lightest accepted material, kg/m³ (lighter than any solid foam).
+    pub const MIN_DENSITY_KG_M3: f64 = 1.0;
     /// Densest accepted material, kg/m³ (denser than any element).
     pub const MAX_DENSITY_KG_M3: f64 = 30_000.0;
 
-    /// A material with density in kg/m³, checked to lie in (0, 30 000] kg/m³.
+    /// A material with density in kg/m³, checked to lie in [1, 30 000] kg/m³.
     pub fn from_kg_m3(name: impl Into<String>, density_kg_m3: f64) -> Result<Self, LayupError> {
         let material = Self { name: name.into(), density_kg_m3 };
         material.validate()?;
         Ok(material)
     }
 
-    /// A material with density in g/cm³, checked to lie in (0, 30] g/cm³.
+    /// A material with density in g/cm³, checked to lie in [0.001, 30] g/cm³.
     pub fn from_g_cm3(name: impl Into<String>, density_g_cm3: f64) -> Result<Self, LayupError> {
         Self::from_kg_m3(name, density_g_cm3 * 1000.0)
     }
@@ -32,16 +34,16 @@ impl Material {
         self.density_kg_m3 / 1000.0
     }
 
-    /// Checks the density (NaN, zero and negative values are rejected).
+    /// Checks the density against [1, 30 000] kg/m³ (NaN, zero and negative values are rejected).
     pub fn validate(&self) -> Result<(), LayupError> {
         let d = self.density_kg_m3;
-        if d > 0.0 && d <= Self::MAX_DENSITY_KG_M3 {
+        if (Self::MIN_DENSITY_KG_M3..=Self::MAX_DENSITY_KG_M3).contains(&d) {
             Ok(())
         } else {
             Err(LayupError::DensityOutOfRange {
                 material: self.name.clone(),
                 density_kg_m3: d,
-                min_kg_m3: 0.0,
+                min_kg_m3: Self::MIN_DENSITY_KG_M3,
                 max_kg_m3: Self::MAX_DENSITY_KG_M3,
             })
         }

@@ -8,7 +8,7 @@ fn pts(coords: &[(f64, f64)]) -> Vec<RzPoint> {
 
 #[test]
 fn zero_negative_and_nan_densities_are_rejected() {
-    for density in [0.0, -950.0, f64::NAN, f64::INFINITY] {
+    for density in [0.0, 0.5, -950.0, f64::NAN, f64::INFINITY, 30_001.0] {
         let err = Material::from_kg_m3("base blend", density).expect_err("bad density");
         assert!(matches!(err, LayupError::DensityOutOfRange { .. }), "{err:?}");
         let text = err.to_string();
@@ -52,6 +52,12 @@ fn nan_anywhere_is_rejected() {
     let design = DiscDesign::new("d", ParametricOutline::new(DiscFamily::Driver), Layup::single(material("a", 1000.0)))
         .with_target(MassTarget::ScaleDensities { mass_kg: f64::NAN });
     assert!(matches!(design.evaluate(), Err(MassError::TargetOutOfRange { .. })));
+}
+
+#[test]
+fn coordinates_beyond_any_disc_are_rejected() {
+    let err = Outline::from_points(pts(&[(0.0, 0.0), (1e200, 0.0), (0.1, 0.01)])).expect_err("huge");
+    assert!(matches!(err, GeometryError::CoordinateOutOfRange { index: 1, .. }), "{err:?}");
 }
 
 #[test]

@@ -2,6 +2,7 @@
 //! checks, meshes, serde). Every numerical check names its source (see CHECKS.md).
 mod design;
 mod errors;
+mod fuzz;
 mod handbook;
 mod mesh;
 mod serde_io;
