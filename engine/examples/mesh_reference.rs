@@ -1,5 +1,6 @@
 //! Writes binary STL meshes of the default driver outline (one material, and a two-material
-//! overmold as one mesh per region) into the folder given as the first argument, and prints
+//! overmold as one mesh per region) and one coarser ASCII STL of the whole outline into the
+//! folder given as the first argument, and prints
 //! Spinfoil's own mass properties of the same designs as JSON, for the trimesh check in
 //! `tests/test_mass_trimesh.py`. STL files are in millimetres.
 //!
@@ -35,13 +36,20 @@ fn run(folder: &Path, segments: usize) -> Result<Value, Box<dyn std::error::Erro
     let dense = Material::from_g_cm3("dense rim blend", 1.28)?;
     let single = Layup::single(base.clone());
     let overmold = Layup::overmold(base, dense, outline.outer_radius_m() - 0.008);
+    let ascii = TriangleMesh::of_outline(&outline, ASCII_SEGMENTS)?;
+    std::fs::write(folder.join(ASCII_FILE), encode_stl_ascii(&ascii, "driver single", StlUnit::Millimetre))?;
     Ok(json!({
+        "ascii": { "file": ASCII_FILE, "segments": ASCII_SEGMENTS },
         "unit": "mm",
         "segments": segments,
         "single": design_json(folder, "driver_single", &outline, &single, segments)?,
         "overmold": design_json(folder, "driver_overmold", &outline, &overmold, segments)?,
     }))
 }
+
+/// A coarser ASCII mesh (ASCII STL is about five times larger than binary).
+const ASCII_SEGMENTS: usize = 72;
+const ASCII_FILE: &str = "driver_single_ascii.stl";
 
 fn design_json(folder: &Path, stem: &str, outline: &Outline, layup: &Layup, segments: usize) -> Result<Value, Box<dyn std::error::Error>> {
     let regions = fill_outline(outline, layup)?;
