@@ -4,6 +4,7 @@ mod errors;
 mod free_body;
 mod metrics;
 mod pitching_moment;
+mod robustness;
 mod vacuum;
 
 use std::sync::Arc;
