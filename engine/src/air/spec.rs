@@ -123,13 +123,10 @@ impl AirSpec {
 
     /// Like [`AirSpec::build`], also returning the humidity terms.
     pub fn build_detailed(&self) -> Result<HumidAir, AirError> {
+        let check = InputRangeError::check_within;
         let (pressure_pa, temperature_k) = self.source.pressure_and_temperature()?;
-        let relative_humidity_pct = InputRangeError::check_within(
-            "relative_humidity_pct",
-            self.relative_humidity_pct,
-            RELATIVE_HUMIDITY_RANGE_PCT,
-            "%",
-        )?;
+        let relative_humidity_pct =
+            check("relative_humidity_pct", self.relative_humidity_pct, RELATIVE_HUMIDITY_RANGE_PCT, "%")?;
         let saturation_vapour_pressure_pa = self.saturation_vapour_pressure_pa(pressure_pa, temperature_k);
         let vapour_pressure_pa = relative_humidity_pct / 100.0 * saturation_vapour_pressure_pa;
         let properties = AirProperties {
@@ -154,26 +151,17 @@ impl AirSpec {
 impl AirSource {
     /// Validated static pressure (Pa) and temperature (K).
     pub fn pressure_and_temperature(&self) -> Result<(f64, f64), AirError> {
+        let check = InputRangeError::check_within;
         match *self {
             AirSource::Standard { altitude_m, temperature_offset_k } => {
-                let altitude_m =
-                    InputRangeError::check_within("altitude_m", altitude_m, ALTITUDE_RANGE_M, "m")?;
-                let offset_k = InputRangeError::check_within(
-                    "temperature_offset_k",
-                    temperature_offset_k,
-                    TEMPERATURE_OFFSET_RANGE_K,
-                    "K",
-                )?;
+                let altitude_m = check("altitude_m", altitude_m, ALTITUDE_RANGE_M, "m")?;
+                let offset_k =
+                    check("temperature_offset_k", temperature_offset_k, TEMPERATURE_OFFSET_RANGE_K, "K")?;
                 Ok((isa_pressure_pa(altitude_m), isa_temperature_k(altitude_m) + offset_k))
             }
             AirSource::Measured { pressure_pa, temperature_k } => Ok((
-                InputRangeError::check_within("pressure_pa", pressure_pa, MEASURED_PRESSURE_RANGE_PA, "Pa")?,
-                InputRangeError::check_within(
-                    "temperature_k",
-                    temperature_k,
-                    MEASURED_TEMPERATURE_RANGE_K,
-                    "K",
-                )?,
+                check("pressure_pa", pressure_pa, MEASURED_PRESSURE_RANGE_PA, "Pa")?,
+                check("temperature_k", temperature_k, MEASURED_TEMPERATURE_RANGE_K, "K")?,
             )),
         }
     }

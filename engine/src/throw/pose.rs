@@ -75,59 +75,18 @@ impl ReleasePose {
 
     /// The release state with this pose, `speed_mps` (m/s) and spin magnitude `spin_rad_s`
     /// (rad/s). Not validated; see [`ReleaseState::validate`].
+    #[rustfmt::skip] // reason: one line per field list keeps the two mappings readable side by side
     pub fn with_speed_and_spin(&self, speed_mps: f64, spin_rad_s: f64) -> ReleaseState {
-        let Self {
-            launch_rad,
-            nose_rad,
-            roll_rad,
-            heading_rad,
-            height_m,
-            off_axis_rate_rad_s,
-            off_axis_direction_rad,
-            style,
-            hand,
-        } = *self;
-        ReleaseState {
-            speed_mps,
-            spin_rad_s,
-            launch_rad,
-            nose_rad,
-            roll_rad,
-            heading_rad,
-            height_m,
-            off_axis_rate_rad_s,
-            off_axis_direction_rad,
-            style,
-            hand,
-        }
+        let Self { launch_rad, nose_rad, roll_rad, heading_rad, height_m, off_axis_rate_rad_s, off_axis_direction_rad, style, hand } = *self;
+        ReleaseState { speed_mps, spin_rad_s, launch_rad, nose_rad, roll_rad, heading_rad, height_m, off_axis_rate_rad_s, off_axis_direction_rad, style, hand }
     }
 }
 
 impl ReleaseState {
     /// The pose of this release (everything but speed and spin).
+    #[rustfmt::skip] // reason: as above
     pub fn pose(&self) -> ReleasePose {
-        let Self {
-            launch_rad,
-            nose_rad,
-            roll_rad,
-            heading_rad,
-            height_m,
-            off_axis_rate_rad_s,
-            off_axis_direction_rad,
-            style,
-            hand,
-            ..
-        } = *self;
-        ReleasePose {
-            launch_rad,
-            nose_rad,
-            roll_rad,
-            heading_rad,
-            height_m,
-            off_axis_rate_rad_s,
-            off_axis_direction_rad,
-            style,
-            hand,
-        }
+        let Self { launch_rad, nose_rad, roll_rad, heading_rad, height_m, off_axis_rate_rad_s, off_axis_direction_rad, style, hand, .. } = *self;
+        ReleasePose { launch_rad, nose_rad, roll_rad, heading_rad, height_m, off_axis_rate_rad_s, off_axis_direction_rad, style, hand }
     }
 }

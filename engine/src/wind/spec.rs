@@ -125,9 +125,9 @@ impl WindSpec {
 
     /// Validates the settings and builds the wind field.
     pub fn build(&self) -> Result<BoundaryLayerWind, WindError> {
+        let check = InputRangeError::check_within;
         let profile = self.profile()?;
-        let from_rad =
-            InputRangeError::check_within("from_deg", self.from_deg, WIND_FROM_RANGE_DEG, "°")?.to_radians();
+        let from_rad = check("from_deg", self.from_deg, WIND_FROM_RANGE_DEG, "°")?.to_radians();
         let toward = -Vector3::new(from_rad.cos(), from_rad.sin(), 0.0);
         let across = Vector3::new(-toward.y, toward.x, 0.0);
         let gusts = self.gusts.as_ref().map(BuiltGusts::new).transpose()?;
@@ -135,20 +135,12 @@ impl WindSpec {
     }
 
     fn profile(&self) -> Result<LogProfile, WindError> {
-        let reference_speed_mps =
-            InputRangeError::check_within("speed_mps", self.speed_mps, WIND_SPEED_RANGE_MPS, "m/s")?;
-        let reference_height_m = InputRangeError::check_within(
-            "reference_height_m",
-            self.reference_height_m,
-            REFERENCE_HEIGHT_RANGE_M,
-            "m",
-        )?;
-        let roughness_length_m = InputRangeError::check_within(
-            "roughness_length_m",
-            self.roughness_length_m,
-            ROUGHNESS_LENGTH_RANGE_M,
-            "m",
-        )?;
+        let check = InputRangeError::check_within;
+        let reference_speed_mps = check("speed_mps", self.speed_mps, WIND_SPEED_RANGE_MPS, "m/s")?;
+        let reference_height_m =
+            check("reference_height_m", self.reference_height_m, REFERENCE_HEIGHT_RANGE_M, "m")?;
+        let roughness_length_m =
+            check("roughness_length_m", self.roughness_length_m, ROUGHNESS_LENGTH_RANGE_M, "m")?;
         if reference_height_m <= roughness_length_m {
             return Err(WindError::ReferenceBelowRoughness { reference_height_m, roughness_length_m });
         }
@@ -174,14 +166,9 @@ struct BuiltGusts {
 
 impl BuiltGusts {
     fn new(spec: &GustSpec) -> Result<Self, WindError> {
-        let intensity =
-            InputRangeError::check_within("gusts.intensity", spec.intensity, GUST_INTENSITY_RANGE, "")?;
-        let lateral_ratio = InputRangeError::check_within(
-            "gusts.lateral_ratio",
-            spec.lateral_ratio,
-            GUST_LATERAL_RATIO_RANGE,
-            "",
-        )?;
+        let check = InputRangeError::check_within;
+        let intensity = check("gusts.intensity", spec.intensity, GUST_INTENSITY_RANGE, "")?;
+        let lateral_ratio = check("gusts.lateral_ratio", spec.lateral_ratio, GUST_LATERAL_RATIO_RANGE, "")?;
         let (along, across) = GustSeries::pair(spec.seed);
         Ok(Self { along, across, intensity, lateral_ratio })
     }
