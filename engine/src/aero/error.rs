@@ -46,7 +46,7 @@ pub enum AeroError {
         expected: usize,
     },
     /// Grid values are not strictly increasing.
-    #[error("line {line}: {column} = {value} does not increase on the previous value {previous}")]
+    #[error("{}{column} = {value} does not increase on the previous value {previous} (values must be strictly increasing)", at_line(*.line))]
     NotIncreasing {
         /// Line of the CSV text (1-based; 0 for tables built in code).
         line: usize,
@@ -108,6 +108,15 @@ pub enum AeroError {
         /// The advance ratio of the offending block.
         advance_ratio: f64,
     },
+}
+
+/// "line N: " for CSV positions, nothing for tables built in code (line 0).
+fn at_line(line: usize) -> String {
+    if line == 0 {
+        String::new()
+    } else {
+        format!("line {line}: ")
+    }
 }
 
 /// Checks that `value` is finite and within `min..=max`.

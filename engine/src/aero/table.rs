@@ -33,12 +33,40 @@ pub struct CoefficientColumns {
 /// used, outside the advance-ratio range the first or last block. Rate terms ([`RateTerms`],
 /// none by default) are added to the tabulated moments.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(try_from = "TableParts", into = "TableParts")]
 pub struct TabulatedCoefficients {
     info: ModelInfo,
     alpha_rad: Vec<f64>,
     advance_ratio: Vec<f64>,
     columns: CoefficientColumns,
     rates: RateTerms,
+}
+
+/// The serialised form of a table; deserialising validates it like the constructors do.
+#[derive(Debug, Clone, Serialize, Deserialize)]
+struct TableParts {
+    info: ModelInfo,
+    alpha_rad: Vec<f64>,
+    #[serde(default)]
+    advance_ratio: Vec<f64>,
+    columns: CoefficientColumns,
+    #[serde(default)]
+    rates: RateTerms,
+}
+
+impl TryFrom<TableParts> for TabulatedCoefficients {
+    type Error = AeroError;
+
+    fn try_from(parts: TableParts) -> Result<Self, AeroError> {
+        Self::with_advance_ratio(parts.info, parts.alpha_rad, parts.advance_ratio, parts.columns)?.with_rate_terms(parts.rates)
+    }
+}
+
+impl From<TabulatedCoefficients> for TableParts {
+    fn from(table: TabulatedCoefficients) -> Self {
+        let TabulatedCoefficients { info, alpha_rad, advance_ratio, columns, rates } = table;
+        Self { info, alpha_rad, advance_ratio, columns, rates }
+    }
 }
 
 /// Where a value falls on one grid axis: lower index and fraction toward the next node.

@@ -433,3 +433,35 @@ fn hummel_sets_fly_a_typical_ultimate_throw_without_failing() {
     let glide = fly_demo(&hummel_2003_lift_drag(), &body, &release).metrics;
     assert!((10.0..=60.0).contains(&glide.carry_m) && glide.landing_lateral_m.abs() < 1e-9);
 }
+
+#[test]
+fn table_rate_terms_add_damping() {
+    // Definition of a linear damping term (common practice, no published source).
+    let rates = RateTerms { pitch_damping: -0.01, ..RateTerms::none() };
+    let table = small_table().with_rate_terms(rates).expect("valid rates");
+    let still = table.coefficients(&input_at(0.0, 0.5, 10.0));
+    let pitching = table.coefficients(&AeroInput { pitch_rate_rad_s: 2.0, ..input_at(0.0, 0.5, 10.0) });
+    assert!((pitching.pitch - still.pitch + 0.02).abs() < 1e-15);
+    let amplifying = RateTerms { roll_damping: 0.1, ..RateTerms::none() };
+    assert!(matches!(small_table().with_rate_terms(amplifying), Err(AeroError::OutOfRange { .. })));
+}
+
+#[test]
+fn coefficient_sets_round_trip_through_json() {
+    let json = serde_json::to_string(&hummel_2003()).expect("serialises");
+    let back: LinearCoefficients = serde_json::from_str(&json).expect("parses");
+    assert_eq!(back, hummel_2003());
+    let table: TabulatedCoefficients = serde_json::from_str(&serde_json::to_string(&small_table()).expect("ser")).expect("de");
+    assert_eq!(table, small_table());
+    let broken = r#"{"info":{"name":"x","source":"y","confidence":"z"},"alpha_rad":[0.1],"columns":{"lift":[0.0],"drag":[0.1],"pitch":[0.0]}}"#;
+    let err = serde_json::from_str::<TabulatedCoefficients>(broken).unwrap_err();
+    assert!(err.to_string().contains("at least 2"), "{err}");
+}
+
+#[test]
+fn code_built_table_errors_do_not_mention_a_line() {
+    let columns = CoefficientColumns { lift: vec![0.0, 1.0], drag: vec![0.1, 0.1], pitch: vec![0.0, 0.0], ..Default::default() };
+    let err = TabulatedCoefficients::new(info("t"), vec![0.1, 0.0], columns).unwrap_err();
+    assert!(!err.to_string().contains("line"), "{err}");
+    assert!(csv_error("alpha_deg,lift,drag,pitch\n5,0,0.1,0\n0,0,0.1,0\n").to_string().starts_with("line 3: alpha_deg = 0"));
+}
