@@ -20,6 +20,7 @@
 
 mod display;
 mod errors;
+mod files;
 mod help;
 mod options;
 mod output;
@@ -29,6 +30,7 @@ mod session;
 
 pub use display::*;
 
+pub use files::{FileAccessError, StudyFolder};
 pub use help::{Docs, FieldDoc, FnDoc};
 pub use options::{read_options, OptionKind, OptionSpec, OptionValues};
 pub use output::{CollectedOutput, MimeBundle, OutputEvent, OutputSink};

@@ -12,6 +12,11 @@ mod show;
 mod tables;
 mod throws;
 
+pub(crate) use discs::DiscValue;
+pub(crate) use environments::EnvironmentValue;
+pub(crate) use flights::{trajectory_table, FlightValue};
+pub(crate) use throws::ThrowValue;
+
 use crate::help::Registrar;
 use crate::output::MimeBundle;
 use crate::session::{InterruptHandle, SinkSlot};
@@ -41,6 +46,7 @@ pub(crate) fn register_packages(reg: &mut Registrar, context: &PackageContext) {
     flights::register(reg);
     tables::register(reg);
     show::register(reg, context);
+    crate::files::register(reg, context.study_dir.clone());
 }
 
 /// The rendering of a domain value, when `value` is one.

@@ -243,3 +243,88 @@ fn flights_expose_the_engines_metrics_and_trajectory() {
     let table = value(&mut s, "compare([f, fly(rim_heavy, t)]).row_count");
     assert_eq!(table, "2");
 }
+
+/// A fresh, empty folder for one test (under the system's temporary folder).
+fn study_folder(name: &str) -> std::path::PathBuf {
+    let dir = std::env::temp_dir().join(format!("spinfoil-lang-{name}-{}", std::process::id()));
+    let _ = std::fs::remove_dir_all(&dir);
+    std::fs::create_dir_all(&dir).unwrap();
+    dir
+}
+
+fn session_in(dir: &std::path::Path) -> Session {
+    Session::new(SessionSettings { study_dir: Some(dir.to_path_buf()), ..Default::default() })
+}
+
+#[test]
+fn designs_round_trip_through_json_and_toml() {
+    let dir = study_folder("roundtrip");
+    let mut s = session_in(&dir);
+    value(&mut s, TWO_DISCS);
+    std::fs::create_dir_all(dir.join("designs")).unwrap();
+    for path in ["designs/rim.json", "designs/rim.toml"] {
+        value(&mut s, &format!("save(rim_heavy, \"{path}\");"));
+        assert!(dir.join(path).exists());
+        let same = value(&mut s, &format!("let a = load_disc(\"{path}\").spin_inertia_g_cm2; let b = rim_heavy.spin_inertia_g_cm2; if a == b {{ \"true\" }} else {{ `${{a}} vs ${{b}}` }}"));
+        assert_eq!(same, "true", "{path}");
+    }
+    value(&mut s, "let t = throw_release(#{ speed_mps: 24, spin_rpm: 900, hyzer_deg: 5 }); save(t, \"t.toml\");");
+    assert_eq!(value(&mut s, "load_throw(\"t.toml\").hyzer_deg == t.hyzer_deg"), "true");
+    value(&mut s, "let day = environment(#{ altitude_m: 420, wind_mps: 3, wind_from_deg: 250 }); save(day, \"day.json\");");
+    assert_eq!(value(&mut s, "load_environment(\"day.json\").density_kg_m3 == day.density_kg_m3"), "true");
+    let e = error(&mut s, "load_disc(\"t.toml\")");
+    assert!(e.message.contains("holds a throw, not a disc"), "{}", e.message);
+    let _ = std::fs::remove_dir_all(&dir);
+}
+
+#[test]
+fn exports_are_written_atomically_inside_the_study_folder() {
+    let dir = study_folder("exports");
+    let mut s = session_in(&dir);
+    value(&mut s, TWO_DISCS);
+    value(&mut s, "save_csv(fly(one_piece, throw_release(#{ speed_mps: 20, spin_rpm: 800 })), \"flight.csv\");");
+    let text = std::fs::read_to_string(dir.join("flight.csv")).unwrap();
+    assert!(text.starts_with("time_s,x_m"), "{}", &text[..40]);
+    value(&mut s, "save_text(compare_mass([one_piece, rim_heavy]).to_csv(), \"mass.csv\");");
+    assert!(std::fs::read_to_string(dir.join("mass.csv")).unwrap().contains("P-7 rim-heavy"));
+    let leftovers: Vec<_> = std::fs::read_dir(&dir).unwrap().filter_map(|e| e.ok()).filter(|e| e.file_name().to_string_lossy().ends_with(".partial")).collect();
+    assert!(leftovers.is_empty());
+    let _ = std::fs::remove_dir_all(&dir);
+}
+
+#[test]
+fn paths_outside_the_study_folder_are_refused() {
+    let dir = study_folder("confined");
+    let outside = study_folder("outside");
+    let mut s = session_in(&dir);
+    value(&mut s, TWO_DISCS);
+    for (path, fragment) in [
+        ("../escape.json", "without '..'"),
+        ("/tmp/escape.json", "without '..'"),
+        ("a/../../escape.json", "without '..'"),
+        ("design.exe", "must end in one of .json, .toml"),
+    ] {
+        let e = error(&mut s, &format!("save(one_piece, \"{path}\")"));
+        assert_eq!(e.kind, "FileError");
+        assert!(e.message.contains(fragment), "{path}: {}", e.message);
+    }
+    #[cfg(unix)]
+    {
+        std::os::unix::fs::symlink(&outside, dir.join("link")).unwrap();
+        let e = error(&mut s, "save(one_piece, \"link/escape.json\")");
+        assert!(e.message.contains("leads outside the study folder"), "{}", e.message);
+        assert!(!outside.join("escape.json").exists());
+    }
+    let _ = std::fs::remove_dir_all(&dir);
+    let _ = std::fs::remove_dir_all(&outside);
+}
+
+#[test]
+fn without_a_study_folder_scripts_touch_no_files() {
+    let mut s = session();
+    value(&mut s, TWO_DISCS);
+    let e = error(&mut s, "save(one_piece, \"a.json\")");
+    assert_eq!(e.kind, "FileError");
+    assert!(e.message.contains("file access is off"), "{}", e.message);
+    assert!(error(&mut s, "load_disc(\"a.json\")").message.contains("file access is off"));
+}

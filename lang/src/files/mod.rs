@@ -1,0 +1,7 @@
+//! Saving and loading designs and exports, confined to the study's folder.
+mod confine;
+mod design_file;
+mod package;
+
+pub use confine::{FileAccessError, StudyFolder};
+pub(crate) use package::register;
