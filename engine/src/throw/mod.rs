@@ -10,6 +10,7 @@ mod error;
 mod limits;
 mod pose;
 mod release;
+mod similarity;
 
 pub use effort::*;
 pub use error::ThrowError;

@@ -251,3 +251,12 @@ fn from_the_same_effort_a_rim_heavy_layup_spins_slower_with_more_angular_momentu
         overmold.spin_inertia_kg_m2 * b.spin_rad_s / (solid.spin_inertia_kg_m2 * a.spin_rad_s);
     assert!(rel_diff(momentum_ratio, inertia_ratio.sqrt()) < 1e-9);
 }
+
+#[test]
+fn release_similarity_numbers() {
+    // common practice, no published source: AR = |ω|R/V, Re = ρVd/μ
+    let release = ReleasePose::default().with_speed_and_spin(21.0, 100.0);
+    assert!(rel_diff(release.advance_ratio(0.105), 0.5) < 1e-12);
+    let air = AirProperties::sea_level_standard();
+    assert!(rel_diff(release.reynolds_number(&air, 0.21), 1.2250 * 21.0 * 0.21 / 1.7894e-5) < 1e-12);
+}
