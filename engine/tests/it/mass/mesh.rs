@@ -55,8 +55,8 @@ fn binary_stl_has_header_count_and_records() {
     // The first record's first vertex, in mm.
     let f = |at: usize| f32::from_le_bytes([bytes[at], bytes[at + 1], bytes[at + 2], bytes[at + 3]]);
     let v = mesh.corners(0)[0];
-    for k in 0..3 {
-        assert!((f64::from(f(84 + 12 + 4 * k)) - v[k] * 1000.0).abs() < 1e-4);
+    for (k, coordinate) in v.iter().enumerate() {
+        assert!((f64::from(f(84 + 12 + 4 * k)) - coordinate * 1000.0).abs() < 1e-4);
     }
 }
 
