@@ -62,22 +62,23 @@ impl FlightSettings {
         Self { relative_tolerance: 1e-11, absolute_tolerance: 1e-12, ..Self::default() }
     }
 
-    /// Checks every field: positive and finite, tolerances below 1.
+    /// Checks every field against its range (finite, positive, bounded).
     pub fn validate(&self) -> Result<(), FlightError> {
-        let positive = |field: &'static str, value: f64, max: f64, range: &'static str| {
-            if value.is_finite() && value > 0.0 && value <= max {
+        let within = |field: &'static str, value: f64, lo: f64, hi: f64, range: &'static str| {
+            if value.is_finite() && value > 0.0 && value >= lo && value <= hi {
                 Ok(())
             } else {
                 Err(FlightError::InvalidSettings { field, value, range })
             }
         };
-        positive("relative_tolerance", self.relative_tolerance, 0.1, "0 < value ≤ 0.1")?;
-        positive("absolute_tolerance", self.absolute_tolerance, 0.1, "0 < value ≤ 0.1")?;
-        positive("max_time_s", self.max_time_s, 3600.0, "0 < value ≤ 3600 s")?;
-        positive("sample_interval_s", self.sample_interval_s, f64::MAX, "finite and > 0 s")?;
-        positive("landing_time_tolerance_s", self.landing_time_tolerance_s, 1e-3, "0 < value ≤ 1e-3 s")?;
-        positive("max_speed_mps", self.max_speed_mps, f64::MAX, "finite and > 0 m/s")?;
-        positive("max_angular_rate_rad_s", self.max_angular_rate_rad_s, f64::MAX, "finite and > 0 rad/s")?;
-        positive("max_steps", f64::from(self.max_steps), f64::MAX, "≥ 1")
+        let big = f64::MAX;
+        within("relative_tolerance", self.relative_tolerance, 0.0, 0.1, "0 < value ≤ 0.1")?;
+        within("absolute_tolerance", self.absolute_tolerance, 0.0, 0.1, "0 < value ≤ 0.1")?;
+        within("max_time_s", self.max_time_s, 0.0, 3600.0, "0 < value ≤ 3600 s")?;
+        within("sample_interval_s", self.sample_interval_s, 1e-5, 10.0, "1e-5 to 10 s")?;
+        within("landing_time_tolerance_s", self.landing_time_tolerance_s, 0.0, 1e-3, "0 < value ≤ 1e-3 s")?;
+        within("max_speed_mps", self.max_speed_mps, 0.0, big, "finite and > 0 m/s")?;
+        within("max_angular_rate_rad_s", self.max_angular_rate_rad_s, 0.0, big, "finite and > 0 rad/s")?;
+        within("max_steps", f64::from(self.max_steps), 1.0, big, "≥ 1")
     }
 }

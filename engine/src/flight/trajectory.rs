@@ -59,28 +59,39 @@ pub(crate) fn integrate(
         return Err(FlightError::NonFinite { time_s, quantity });
     }
     let stats = outcome.map_err(|e| solver_error(e, settings))?;
-    let mut step_times_s = solver.x_out().clone();
-    let mut step_states = solver.y_out().clone();
-    let stats = (stats.num_eval, stats.accepted_steps, stats.rejected_steps);
-    let mut trajectory =
-        Trajectory { dense, initial, end_time_s: 0.0, landed: false, stats, step_times_s: Vec::new(), step_states: Vec::new() };
-    match stop.take() {
-        Some(StopReason::Failed(error)) => return Err(error),
+    let trajectory = Trajectory {
+        dense,
+        initial,
+        step_times_s: solver.x_out().clone(),
+        step_states: solver.y_out().clone(),
+        end_time_s: settings.max_time_s,
+        landed: false,
+        stats: (stats.num_eval, stats.accepted_steps, stats.rejected_steps),
+    };
+    finish(trajectory, stop.take(), body.radius_m(), settings)
+}
+
+/// Ends the trajectory according to why the solver stopped.
+fn finish(
+    mut trajectory: Trajectory,
+    stop: Option<StopReason>,
+    radius_m: f64,
+    settings: &FlightSettings,
+) -> Result<Trajectory, FlightError> {
+    match stop {
+        Some(StopReason::Failed(error)) => Err(error),
         Some(StopReason::GroundContact) => {
-            step_times_s.pop();
-            step_states.pop();
-            let after = solver.x_out().last().copied().unwrap_or(0.0);
-            let before = step_times_s.last().copied().unwrap_or(0.0);
+            let after = trajectory.step_times_s.pop().unwrap_or(0.0);
+            trajectory.step_states.pop();
+            let before = trajectory.step_times_s.last().copied().unwrap_or(0.0);
             trajectory.end_time_s = after;
-            trajectory.end_time_s = locate_contact(&trajectory, body.radius_m(), before, after, settings);
+            trajectory.end_time_s = locate_contact(&trajectory, radius_m, before, after, settings);
             trajectory.landed = true;
+            Ok(trajectory)
         }
-        None if settings.end_at_time_limit => trajectory.end_time_s = settings.max_time_s,
-        None => return Err(FlightError::NoLanding { max_time_s: settings.max_time_s }),
+        None if settings.end_at_time_limit => Ok(trajectory),
+        None => Err(FlightError::NoLanding { max_time_s: settings.max_time_s }),
     }
-    trajectory.step_times_s = step_times_s;
-    trajectory.step_states = step_states;
-    Ok(trajectory)
 }
 
 fn new_solver<'a>(
