@@ -1,7 +1,7 @@
 use nalgebra::Vector3;
 use serde::{Deserialize, Serialize};
 
-use crate::aero::AeroModel;
+use crate::aero::{AeroModel, ModelInfo};
 use crate::dynamics::{DiscBody, DiscState};
 use crate::throw::ReleaseState;
 
@@ -19,6 +19,10 @@ pub struct Flight {
     pub samples: Vec<FlightSample>,
     /// Summary numbers (see [`FlightMetrics`] for the definitions).
     pub metrics: FlightMetrics,
+    /// The release it was flown from.
+    pub release: ReleaseState,
+    /// Name, source and confidence of the coefficient set it was flown with.
+    pub model: ModelInfo,
     /// True when the flight ended by ground contact of the rim; false when it reached
     /// [`FlightSettings::max_time_s`] with `end_at_time_limit` set.
     pub landed: bool,
@@ -62,6 +66,8 @@ pub fn fly(
     Ok(Flight {
         samples,
         metrics,
+        release: *release,
+        model: model.info(),
         landed: trajectory.landed,
         release_state: trajectory.state_at(0.0),
         landing_state: trajectory.state_at(trajectory.end_time_s),
