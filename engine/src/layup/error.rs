@@ -75,6 +75,14 @@ pub enum LayupError {
     /// The layup lists no regions.
     #[error("a layup needs at least one region")]
     NoRegions,
+    /// More than one region claims the rest of the outline.
+    #[error("regions '{first}' and '{second}' both take the rest of the outline; at most one region may")]
+    SeveralRests {
+        /// First rest region.
+        first: String,
+        /// Second rest region.
+        second: String,
+    },
     /// Two regions share a name.
     #[error("two regions are named '{region}'; region names must be unique")]
     DuplicateRegion {

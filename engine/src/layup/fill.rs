@@ -10,9 +10,11 @@ pub struct FilledRegion {
     pub name: String,
     /// Its material.
     pub material: Material,
-    /// Counter-clockwise polygons (m) whose union is the region's part of the outline. A piece
-    /// may contain zero-width bridges where a clip line cut the outline in several places;
-    /// they add nothing to areas or integrals.
+    /// Polygons (m) whose union is the region's part of the outline. A piece may contain
+    /// zero-width bridges where a clip line cut the outline in several places; they add
+    /// nothing to areas or integrals. The rest region is the whole outline (counter-clockwise)
+    /// plus every other region's pieces reversed (clockwise, so they subtract): revolved, it is
+    /// a closed solid with cavities.
     pub pieces: Vec<Vec<RzPoint>>,
 }
 
@@ -29,17 +31,19 @@ const M2_TO_MM2: f64 = 1e6;
 
 /// Clips every region of `layup` to `outline` and checks that the regions cover the outline
 /// exactly once: overlaps, gaps and empty regions larger than 1e-9 of the outline's area are
-/// errors naming the regions and the area (mm²).
+/// errors naming the regions and the area (mm²). A rest region takes what the others leave
+/// (so there is no gap), and is an empty-region error when they leave nothing.
 pub fn fill_outline(outline: &Outline, layup: &Layup) -> Result<Vec<FilledRegion>, LayupError> {
     let regions = layup.regions(outline.outer_radius_m())?;
     check_names(&regions)?;
     let tolerance_m2 = COVER_TOLERANCE * outline.area_m2();
     let cells: Vec<Vec<Vec<HalfPlane>>> = regions.iter().map(Region::convex_cells).collect::<Result<_, _>>()?;
-    let filled: Vec<FilledRegion> = regions
+    let mut filled: Vec<FilledRegion> = regions
         .iter()
         .zip(&cells)
         .map(|(region, cells)| fill_region(outline, region, cells))
         .collect();
+    fill_rest(outline, &regions, &mut filled)?;
     for region in &filled {
         let area = region.area_m2();
         if area <= tolerance_m2 {
@@ -49,6 +53,21 @@ pub fn fill_outline(outline: &Outline, layup: &Layup) -> Result<Vec<FilledRegion
     check_overlaps(&filled, &cells, tolerance_m2)?;
     check_gap(outline, &filled, tolerance_m2)?;
     Ok(filled)
+}
+
+/// Fills the rest region, if any, with the outline less every other region.
+fn fill_rest(outline: &Outline, regions: &[Region], filled: &mut [FilledRegion]) -> Result<(), LayupError> {
+    let rests: Vec<usize> = (0..regions.len()).filter(|&i| regions[i].is_rest()).collect();
+    let Some(&rest) = rests.first() else { return Ok(()) };
+    if let Some(&second) = rests.get(1) {
+        return Err(LayupError::SeveralRests { first: regions[rest].name.clone(), second: regions[second].name.clone() });
+    }
+    let mut pieces = vec![outline.points().to_vec()];
+    for other in filled.iter().filter(|f| f.name != regions[rest].name) {
+        pieces.extend(other.pieces.iter().map(|p| p.iter().rev().copied().collect::<Vec<_>>()));
+    }
+    filled[rest].pieces = pieces;
+    Ok(())
 }
 
 fn check_names(regions: &[Region]) -> Result<(), LayupError> {

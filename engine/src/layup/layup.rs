@@ -1,4 +1,5 @@
 use super::{LayupError, Material, Region, RegionBounds};
+use crate::geometry::RzPoint;
 use serde::{Deserialize, Serialize};
 
 /// How materials fill a disc's outline. Serialised with a `kind` tag.
@@ -47,6 +48,14 @@ impl Layup {
                 Region::bounded("insert ring", insert, RegionBounds::radial(Some(inner_m), Some(outer_m))),
                 Region::bounded("outer base", base, RegionBounds::radial(Some(outer_m), None)),
             ],
+        }
+    }
+
+    /// A base material with an embedded `insert` inside the simple polygon `insert_points`
+    /// (m): two regions, "insert" and "base" (the rest of the outline).
+    pub fn embedded_insert(base: Material, insert: Material, insert_points: Vec<RzPoint>) -> Self {
+        Layup::Regions {
+            regions: vec![Region::polygon("insert", insert, insert_points), Region::rest("base", base)],
         }
     }
 

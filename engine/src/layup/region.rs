@@ -66,6 +66,9 @@ pub enum RegionShape {
         /// The polygon's points, m.
         points: Vec<RzPoint>,
     },
+    /// Whatever part of the outline no other region fills (at most one per layup), e.g. the
+    /// base material around an embedded insert.
+    Rest,
 }
 
 /// A part of the outline filled with one material.
@@ -90,7 +93,18 @@ impl Region {
         Self { name: name.into(), material, shape: RegionShape::Polygon { points } }
     }
 
-    /// The region as convex cells (each a list of half-planes) whose union is the region.
+    /// The rest of the outline (see [`RegionShape::Rest`]).
+    pub fn rest(name: impl Into<String>, material: Material) -> Self {
+        Self { name: name.into(), material, shape: RegionShape::Rest }
+    }
+
+    /// Whether this region takes the rest of the outline.
+    pub fn is_rest(&self) -> bool {
+        self.shape == RegionShape::Rest
+    }
+
+    /// The region as convex cells (each a list of half-planes) whose union is the region
+    /// (none for the rest region, which is filled by subtraction).
     pub(crate) fn convex_cells(&self) -> Result<Vec<Vec<HalfPlane>>, LayupError> {
         self.material.validate()?;
         match &self.shape {
@@ -99,6 +113,7 @@ impl Region {
                 Ok(vec![bounds.planes()])
             }
             RegionShape::Polygon { points } => self.polygon_cells(points),
+            RegionShape::Rest => Ok(Vec::new()),
         }
     }
 

@@ -115,6 +115,14 @@ fn gaps_between_regions_are_rejected_with_the_uncovered_area() {
     let outside = two_regions(RegionBounds::everything(), RegionBounds::radial(Some(0.2), None));
     let err = mass_breakdown(&outline, &outside).expect_err("empty region");
     assert!(matches!(err, MassError::Layup(LayupError::EmptyRegion { .. })), "{err:?}");
+    let nothing_left = Layup::Regions {
+        regions: vec![Region::bounded("all", material("a", 900.0), RegionBounds::everything()), Region::rest("rest", material("b", 900.0))],
+    };
+    let err = mass_breakdown(&outline, &nothing_left).expect_err("empty rest");
+    assert!(matches!(err, MassError::Layup(LayupError::EmptyRegion { ref region, .. }) if region == "rest"), "{err:?}");
+    let two_rests = Layup::Regions { regions: vec![Region::rest("a", material("a", 900.0)), Region::rest("b", material("b", 900.0))] };
+    let err = mass_breakdown(&outline, &two_rests).expect_err("two rests");
+    assert!(matches!(err, MassError::Layup(LayupError::SeveralRests { .. })), "{err:?}");
 }
 
 #[test]

@@ -106,3 +106,33 @@ fn polygon_section_matches_pappus_for_a_triangle() {
     let v = mass_breakdown(&outline, &Layup::single(material("m", 1000.0))).expect("fits").volume_m3;
     assert_rel(v, 2.0 * PI * (2.0 * a + b) / 3.0 * (b - a) * c / 2.0, 1e-12, "volume");
 }
+
+#[test]
+fn embedded_insert_ring_adds_a_hollow_cylinder_of_the_density_difference() {
+    // A solid cylinder of base density with a rectangular-section insert ring (R1..R2,
+    // z1..z2) of denser material: the same as the cylinder plus a hollow cylinder of density
+    // ρ_insert − ρ_base. source: Meriam & Kraige, Dynamics, Appendix D (solid and hollow
+    // cylinder, parallel-axis theorem).
+    let (r, h) = (0.1, 0.01);
+    let (r1, r2, z1, z2) = (0.09, 0.095, 0.003, 0.007);
+    let (rho_base, rho_insert) = (950.0, 2700.0);
+    let insert = vec![RzPoint::new(r1, z1), RzPoint::new(r2, z1), RzPoint::new(r2, z2), RzPoint::new(r1, z2)];
+    let layup = Layup::embedded_insert(material("base", rho_base), material("insert", rho_insert), insert);
+    let b = mass_breakdown(&rectangle(0.0, r, 0.0, h), &layup).expect("insert inside the outline");
+    let hi = z2 - z1;
+    let parts = [
+        (rho_base * PI * r * r * h, r * r, h, h / 2.0, r * r / 2.0),
+        ((rho_insert - rho_base) * PI * (r2 * r2 - r1 * r1) * hi, r1 * r1 + r2 * r2, hi, (z1 + z2) / 2.0, (r1 * r1 + r2 * r2) / 2.0),
+    ];
+    let mass: f64 = parts.iter().map(|p| p.0).sum();
+    let zc = parts.iter().map(|p| p.0 * p.3).sum::<f64>() / mass;
+    let iz: f64 = parts.iter().map(|p| p.0 * p.4).sum();
+    let ix: f64 = parts.iter().map(|p| p.0 * (3.0 * p.1 + p.2 * p.2) / 12.0 + p.0 * (p.3 - zc).powi(2)).sum();
+    assert_rel(b.properties.mass_kg, mass, 1e-12, "mass");
+    assert_rel(b.properties.cg_height_m, zc, 1e-12, "cg");
+    assert_rel(b.properties.spin_inertia_kg_m2, iz, 1e-9, "I_z");
+    assert_rel(b.properties.transverse_inertia_kg_m2, ix, 1e-9, "I_x");
+    let insert_mass = rho_insert * PI * (r2 * r2 - r1 * r1) * hi;
+    assert_rel(b.regions[0].mass_kg, insert_mass, 1e-12, "insert region mass");
+    assert_rel(b.regions[1].mass_kg, mass - insert_mass, 1e-12, "base (rest) region mass");
+}

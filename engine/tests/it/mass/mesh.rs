@@ -68,3 +68,17 @@ fn ascii_stl_lists_every_facet() {
     assert_eq!(text.matches("facet normal").count(), mesh.triangles.len());
     assert_eq!(text.matches("vertex").count(), 3 * mesh.triangles.len());
 }
+
+#[test]
+fn rest_region_around_an_insert_meshes_as_a_solid_with_a_cavity() {
+    let insert = vec![RzPoint::new(0.09, 0.003), RzPoint::new(0.095, 0.003), RzPoint::new(0.095, 0.007), RzPoint::new(0.09, 0.007)];
+    let layup = Layup::embedded_insert(material("base", 950.0), material("insert", 2700.0), insert);
+    let outline = rectangle(0.0, 0.1, 0.0, 0.01);
+    let regions = fill_outline(&outline, &layup).expect("fits");
+    let meshes: Vec<TriangleMesh> = regions.iter().map(|r| TriangleMesh::of_region(r, 64).expect("mesh")).collect();
+    for mesh in &meshes {
+        assert_closed_and_oriented(mesh);
+    }
+    let whole = TriangleMesh::of_outline(&outline, 64).expect("mesh").signed_volume_m3();
+    assert_rel(meshes[0].signed_volume_m3() + meshes[1].signed_volume_m3(), whole, 1e-12, "insert + rest");
+}

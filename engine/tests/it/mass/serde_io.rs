@@ -18,6 +18,7 @@ fn layups() -> Vec<Layup> {
         Layup::single(base.clone()),
         Layup::overmold(base.clone(), material("dense rim blend", 1280.0), 0.0975),
         Layup::insert_ring(base.clone(), material("insert", 2700.0), 0.09, 0.095),
+        Layup::embedded_insert(base.clone(), material("insert", 2700.0), vec![RzPoint::new(0.09, 0.003), RzPoint::new(0.095, 0.003), RzPoint::new(0.092, 0.006)]),
         Layup::Regions {
             regions: vec![
                 Region::bounded("plate", base.clone(), RegionBounds::radial(None, Some(0.09))),
