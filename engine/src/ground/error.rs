@@ -1,5 +1,7 @@
 use thiserror::Error;
 
+use crate::flight::FlightError;
+
 /// Everything that can go wrong when describing the ground or playing a landing out on it.
 ///
 /// Each variant names the offending value and the allowed range.
@@ -77,6 +79,22 @@ pub enum GroundError {
         time_s: f64,
         /// The number of steps taken.
         steps: usize,
+    },
+    /// The flight before the ground phase failed.
+    #[error(transparent)]
+    Flight(#[from] FlightError),
+    /// The flight reached its time limit without touching the ground.
+    #[error("the flight did not reach the ground within {time_s:.2} s, so there is no ground play")]
+    FlightDidNotLand {
+        /// Time aloft when the flight stopped, s.
+        time_s: f64,
+    },
+    /// At the flight's landing (level ground at z = 0) the rim is already below the ground
+    /// plane: the plane lies above z = 0 there and would have been hit earlier.
+    #[error("the ground plane lies {depth_m:.3} m above the flight's landing point (rim contact at z = 0); raised or uphill ground is not yet supported by the flight's landing event")]
+    GroundAboveLanding {
+        /// How far the rim is below the plane, m.
+        depth_m: f64,
     },
     /// The ground-phase state became non-finite.
     #[error("ground play produced a non-finite {quantity} at t = {time_s:.4} s after landing")]

@@ -19,7 +19,7 @@ use super::terrain::Ground;
 /// faster than [`GroundSettings::skip_min_speed_mps`] the disc skips (ballistic, torque-free)
 /// to the next contact and impacts again; otherwise it settles: nearly upright discs (tilt ≥
 /// [`GroundSettings::roll_min_tilt_rad`]) roll on the rim, the rest lie flat and slide (see the
-/// `slide` and `roll` model notes in the module docs of [`crate::ground`]).
+/// model notes in [`crate::ground`]).
 pub fn play_out_landing(
     body: &ContactBody,
     ground: &Ground,

@@ -1,10 +1,12 @@
 //! Integration tests: ground (surfaces, rim contact, impacts, ground play until rest).
 use nalgebra::Vector3;
+use proptest::prelude::*;
 use rand::{Rng, SeedableRng};
 use rand_chacha::ChaCha8Rng;
 use spinfoil_engine::{
-    lowest_rim_point, play_out_landing, resolve_impact, ContactBody, ContactState, Ground, GroundEnding, GroundError,
-    GroundPhase, GroundPlane, GroundPlay, GroundSettings, Surface, SurfacePreset, STANDARD_GRAVITY_MPS2,
+    demo_driver, fly_to_rest, lowest_rim_point, play_out_landing, resolve_impact, ContactBody, ContactState, DiscBody,
+    FlightConditions, FlightSettings, FlightToRest, Ground, GroundEnding, GroundError, GroundPhase, GroundPlane,
+    GroundPlay, GroundSettings, Hand, ReleaseState, Style, Surface, SurfacePreset, STANDARD_GRAVITY_MPS2,
 };
 
 use crate::common::rel_diff;
@@ -86,6 +88,13 @@ fn energy_never_increases_across_an_impact_for_every_surface() {
             );
             // The contact point no longer moves into the ground (rigid, non-penetrating).
             assert!(out.contact_velocity_mps.z >= -1e-9, "contact still approaching: {}", out.contact_velocity_mps.z);
+            // The impulse acts at the contact point, so the angular momentum about it is kept
+            // (source: physics law, angular impulse–momentum about the point of application).
+            let about_contact = |st: &ContactState| {
+                body.angular_momentum(&st.normal, &st.angular_velocity_rad_s) - rim.arm_m.cross(&(st.velocity_mps * body.mass_kg))
+            };
+            let (before, after) = (about_contact(&state), about_contact(&out.state));
+            assert!((after - before).norm() <= 1e-9 * before.norm().max(1e-6), "{before} vs {after}");
         }
     }
 }
@@ -291,5 +300,139 @@ fn random_landings_always_come_to_rest_with_finite_results() {
         assert!(result.ground_play_m.is_finite() && result.time_to_rest_s.is_finite());
         assert!(result.samples.windows(2).all(|w| w[1].time_s >= w[0].time_s), "samples out of order");
         assert!(result.rest_state.kinetic_energy_j(&disc()) == 0.0);
+    }
+}
+
+#[test]
+fn frictionless_rim_impact_matches_newtons_closed_form() {
+    // source: Meriam & Kraige, Engineering Mechanics: Dynamics, eccentric impact of a rigid body
+    // (normal impulse P = (1 + e)(−u_n) / (1/m + (r×k̂)ᵀ I⁻¹ (r×k̂)); without friction Stronge's
+    // energetic coefficient and Newton's agree: Stronge (2000), Impact Mechanics, ch. 4).
+    let body = disc();
+    let plane = GroundPlane::default();
+    let surface = Surface::new(0.0, 0.6, 0.0).expect("valid");
+    let mut state = landing(Vector3::new(5.0, 1.0, -3.0), tilted_axis(0.4, 0.7), -60.0);
+    state.angular_velocity_rad_s += Vector3::new(2.0, -1.0, 0.0);
+    let rim = lowest_rim_point(&plane, &state.position_m, &state.normal, body.radius_m);
+    let k = Vector3::z();
+    let u_n = (state.velocity_mps + state.angular_velocity_rad_s.cross(&rim.arm_m)).dot(&k);
+    let lever = rim.arm_m.cross(&k);
+    let k_nn = 1.0 / body.mass_kg + lever.dot(&(body.inverse_inertia_world(&state.normal) * lever));
+    let expected = 1.6 * (-u_n) / k_nn;
+    let out = resolve_impact(&body, &state, &rim.arm_m, &k, &surface, 0.0).expect("resolves");
+    assert!(rel_diff(out.impulse_ns.z, expected) < 1e-9, "{} vs {expected}", out.impulse_ns.z);
+    assert!(out.impulse_ns.xy().norm() < 1e-12);
+    assert!(rel_diff(out.contact_velocity_mps.z, -0.6 * u_n) < 1e-9);
+}
+
+#[test]
+fn rough_plastic_impact_brings_the_contact_point_to_rest() {
+    // source: Stronge (2000), Impact Mechanics, ch. 5 (with enough friction the slip is arrested
+    // and stays stuck; with e = 0 the normal velocity ends at zero).
+    let body = disc();
+    let plane = GroundPlane::default();
+    let surface = Surface::new(5.0, 0.0, 0.0).expect("valid");
+    let state = landing(Vector3::new(3.0, 0.5, -2.0), tilted_axis(0.5, 2.0), 40.0);
+    let rim = lowest_rim_point(&plane, &state.position_m, &state.normal, body.radius_m);
+    let out = resolve_impact(&body, &state, &rim.arm_m, &Vector3::z(), &surface, 0.0).expect("resolves");
+    assert!(out.contact_velocity_mps.norm() < 1e-9, "contact still moving: {}", out.contact_velocity_mps);
+}
+
+fn driver_release(spin_rad_s: f64) -> ReleaseState {
+    ReleaseState {
+        speed_mps: 24.0,
+        spin_rad_s,
+        launch_rad: 0.17,
+        nose_rad: 0.0,
+        roll_rad: 0.15,
+        heading_rad: 0.0,
+        height_m: 1.5,
+        off_axis_rate_rad_s: 0.0,
+        off_axis_direction_rad: 0.0,
+        style: Style::Backhand,
+        hand: Hand::Right,
+    }
+}
+
+fn driver_body() -> DiscBody {
+    let body = disc();
+    DiscBody {
+        mass_kg: body.mass_kg,
+        spin_inertia_kg_m2: body.spin_inertia_kg_m2,
+        transverse_inertia_kg_m2: body.transverse_inertia_kg_m2,
+        diameter_m: 2.0 * body.radius_m,
+    }
+}
+
+fn throw_to_rest(ground: &Ground) -> Result<FlightToRest, GroundError> {
+    let conditions = FlightConditions::default();
+    let release = driver_release(110.0);
+    fly_to_rest(&driver_body(), &demo_driver(), &release, &conditions, &FlightSettings::default(), ground, &GroundSettings::default())
+}
+
+#[test]
+fn a_throw_continues_from_its_landing_to_rest() {
+    // source: common practice, no published source (continuity: the ground phase starts where
+    // and how the flight ended).
+    let whole = throw_to_rest(&Ground::level(SurfacePreset::ShortGrass)).expect("throw to rest");
+    let landing = whole.flight.landing_state;
+    assert_eq!(whole.ground.landing_position_m, landing.position_m);
+    let expected = ContactState::from_disc_state(&landing).expect("valid").kinetic_energy_j(&ContactBody::from(driver_body()));
+    assert!(rel_diff(whole.ground.landing_energy_j, expected) < 1e-12);
+    assert_ne!(whole.ground.ending, GroundEnding::Unsettled);
+    assert!(whole.ground.ground_play_m > 0.1, "{}", whole.ground.ground_play_m);
+    let carry = landing.position_m.xy().norm();
+    assert!(whole.rest_distance_m() > carry, "rest {} m, carry {carry} m", whole.rest_distance_m());
+}
+
+#[test]
+fn a_lower_ground_is_reached_by_a_fall_and_a_higher_one_is_an_error() {
+    let lower = Ground::new(GroundPlane::level(-0.3).expect("valid"), SurfacePreset::ShortGrass);
+    let whole = throw_to_rest(&lower).expect("falls to the lower ground");
+    assert!(whole.ground.rest_position_m.z < -0.29);
+    let higher = Ground::new(GroundPlane::level(0.3).expect("valid"), SurfacePreset::ShortGrass);
+    assert!(matches!(throw_to_rest(&higher), Err(GroundError::GroundAboveLanding { .. })));
+}
+
+#[test]
+fn a_slope_steeper_than_friction_holds_ends_unsettled_without_hanging() {
+    let plane = GroundPlane::new(0.0, 25f64.to_radians(), 0.0).expect("valid");
+    let ground = Ground::new(plane, Surface::new(0.2, 0.3, 0.1).expect("valid"));
+    let settings = GroundSettings { max_time_s: 5.0, ..GroundSettings::default() };
+    let start = ContactState { position_m: Vector3::zeros(), velocity_mps: Vector3::zeros(), normal: plane.normal(), angular_velocity_rad_s: Vector3::zeros() };
+    let result = play_out_landing(&disc(), &ground, &start, &settings).expect("runs");
+    assert_eq!(result.ending, GroundEnding::Unsettled);
+    assert!(result.time_to_rest_s <= 5.0 + 1e-9);
+}
+
+/// Any finite or non-finite number, with the awkward ones over-represented.
+fn any_number() -> impl Strategy<Value = f64> {
+    prop_oneof![
+        4 => -30.0..30.0f64,
+        1 => Just(f64::NAN),
+        1 => Just(f64::INFINITY),
+        1 => Just(-1e300),
+        1 => Just(0.0),
+    ]
+}
+
+proptest! {
+    #![proptest_config(ProptestConfig { cases: 200, ..ProptestConfig::default() })]
+    #[test]
+    fn arbitrary_inputs_never_panic(
+        numbers in proptest::collection::vec(any_number(), 17),
+    ) {
+        // Every input either plays out or is a typed error; nothing panics, nothing is NaN.
+        let v = |i: usize| Vector3::new(numbers[i], numbers[i + 1], numbers[i + 2]);
+        let state = ContactState { position_m: v(0), velocity_mps: v(3), normal: v(6), angular_velocity_rad_s: v(9) };
+        let surface = Surface::new(numbers[12], numbers[13].abs() / 30.0, numbers[14].abs());
+        let plane = GroundPlane::new(0.0, numbers[15].abs() / 60.0, numbers[16]);
+        let settings = GroundSettings { max_time_s: 2.0, ..GroundSettings::default() };
+        if let (Ok(surface), Ok(plane)) = (surface, plane) {
+            if let Ok(result) = play_out_landing(&disc(), &Ground::new(plane, surface), &state, &settings) {
+                prop_assert!(result.ground_play_m.is_finite() && result.time_to_rest_s.is_finite());
+                prop_assert!(result.samples.iter().all(|s| s.position_m.iter().all(|c| c.is_finite())));
+            }
+        }
     }
 }
