@@ -58,7 +58,7 @@ fn report(args: ReportArgs) -> anyhow::Result<Outcome> {
     let executed = args.out.join(format!("{stem}.ipynb"));
     notebook.save(&executed)?;
     let html = args.out.join(format!("{stem}.html"));
-    std::fs::write(&html, html_report(&notebook, &stem)).with_context(|| format!("cannot write {}", html.display()))?;
+    std::fs::write(&html, html_report(&notebook, &args.notebook.file_name().map_or_else(|| stem.clone(), |n| n.to_string_lossy().to_string()))).with_context(|| format!("cannot write {}", html.display()))?;
     println!("{} code cells run; wrote {} and {}", summary.cells_run, executed.display(), html.display());
     for (cell, error) in &summary.errors {
         eprintln!("cell {} failed:\n{}", cell + 1, error.text());

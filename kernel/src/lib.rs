@@ -7,6 +7,17 @@
 //! Folders: `jupyter/` (connection file, wire format and signing, sockets, handlers, session
 //! thread), `kernelspec/` (install, logo), `notebook/` (nbformat 4 documents, headless runner,
 //! HTML report), `script/` (scripts and the terminal).
+//!
+//! ```
+//! use spinfoil_kernel::notebook::{run_notebook, Notebook, RunSettings};
+//! let json = serde_json::json!({"nbformat": 4, "nbformat_minor": 5, "metadata": {}, "cells": [
+//!     {"cell_type": "code", "source": "let spin_rpm = 900; spin_rpm / 60", "metadata": {},
+//!      "outputs": [], "execution_count": null}]});
+//! let mut notebook = Notebook::from_json(json).unwrap();
+//! let summary = run_notebook(&mut notebook, &RunSettings::default());
+//! assert!(summary.errors.is_empty());
+//! assert_eq!(notebook.outputs(0)[0]["data"]["text/plain"], "15");
+//! ```
 #![deny(missing_docs)]
 
 pub mod error_report;

@@ -9,12 +9,13 @@ pub use spinfoil_lang::SAFETY_CAUTION;
 const STYLE: &str = "body{font-family:system-ui,sans-serif;max-width:60rem;margin:2rem auto;padding:0 1rem;color:#1b2a30}\
 pre{background:#f3f6f7;padding:.6rem;overflow-x:auto;border-radius:4px}\
 pre.code{border-left:3px solid #2f8f9d}pre.stderr{background:#fff4e5}pre.error{background:#fdecea;color:#8a1c12}\
-.count{color:#6b7f86;font-size:.8rem}table{border-collapse:collapse;margin:.5rem 0}\
+.count,.source{color:#6b7f86;font-size:.8rem}table{border-collapse:collapse;margin:.5rem 0}\
 td,th{border:1px solid #c9d5d9;padding:.2rem .5rem}.output svg{max-width:100%;height:auto}\
 footer{margin-top:3rem;border-top:1px solid #c9d5d9;padding-top:1rem;font-size:.9rem;color:#4b5f66}";
 
-/// The report of `notebook` titled `title`.
-pub fn html_report(notebook: &Notebook, title: &str) -> String {
+/// The report of `notebook`, read from the file `source_name`; titled by its first heading.
+pub fn html_report(notebook: &Notebook, source_name: &str) -> String {
+    let title = first_heading(notebook).unwrap_or_else(|| source_name.to_string());
     let mut body = String::new();
     for (index, cell) in notebook.cells().iter().enumerate() {
         body.push_str(&match cell.cell_type.as_str() {
@@ -24,10 +25,18 @@ pub fn html_report(notebook: &Notebook, title: &str) -> String {
         });
     }
     format!(
-        "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>{title}</title>\n<style>{STYLE}</style>\n</head>\n<body>\n<h1>{title}</h1>\n{body}<footer>\n<p><strong>Safety.</strong> {SAFETY_CAUTION}</p>\n<p>Report written by Spinfoil {version}.</p>\n</footer>\n</body>\n</html>\n",
-        title = escape(title),
+        "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>{title}</title>\n<style>{STYLE}</style>\n</head>\n<body>\n<p class=\"source\">Spinfoil report of {source}</p>\n{body}<footer>\n<p><strong>Safety.</strong> {SAFETY_CAUTION}</p>\n<p>Report written by Spinfoil {version}.</p>\n</footer>\n</body>\n</html>\n",
+        title = escape(&title),
+        source = escape(source_name),
         version = env!("CARGO_PKG_VERSION"),
     )
+}
+
+fn first_heading(notebook: &Notebook) -> Option<String> {
+    let cells = notebook.cells();
+    let markdown = cells.iter().find(|c| c.cell_type == "markdown")?;
+    let line = markdown.source.lines().find(|l| l.starts_with('#'))?;
+    Some(line.trim_start_matches('#').trim().to_string())
 }
 
 fn code_cell(notebook: &Notebook, index: usize, source: &str) -> String {
@@ -101,7 +110,7 @@ mod tests {
                 {"output_type": "error", "ename": "E", "evalue": "v", "traceback": ["E: v", "  at line 1"]}
             ]}
         ]})).unwrap();
-        let html = html_report(&notebook, "Study & notes");
+        let html = html_report(&notebook, "study & notes.ipynb");
         assert!(html.contains("<h1>Wing study</h1>"));
         assert!(html.contains("<em>invented</em>"));
         assert!(html.contains("<pre class=\"code\">a &lt; b</pre>"));
@@ -109,7 +118,8 @@ mod tests {
         assert!(html.contains("<table><tr><td>1</td></tr></table>"));
         assert!(html.contains("E: v\n  at line 1"));
         assert!(html.contains("[3]"));
-        assert!(html.contains("<title>Study &amp; notes</title>"));
+        assert!(html.contains("<title>Wing study</title>"));
+        assert!(html.contains("report of study &amp; notes.ipynb"));
         assert!(html.contains(SAFETY_CAUTION));
     }
 }

@@ -1,0 +1,3 @@
+//! Integration tests of the `spinfoil` binary, one module per capability.
+mod command_line;
+mod support;
