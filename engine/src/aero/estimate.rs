@@ -18,13 +18,17 @@
 //!   plus the rim's frontal area 4t/(πd) (relative to the planform) times a pressure-drag factor
 //!   k = e/(1 + w/t), where e = 1 − ½·min(1, 2r_le/t) credits a rounded nose (k is a heuristic,
 //!   common practice, no published source);
-//! - rate terms: Hummel's (2003) damping values (rad/s, values from memory, unverified).
+//! - rate terms: Hummel's (2003) damping values C_Mq, C_Rp, C_Nr (rad/s, values from memory,
+//!   unverified); his roll-from-spin term C_Rr is left out (zero): as remembered it outweighs
+//!   every other moment at typical spins (see [`hummel_2003`]), and spin effects on the
+//!   forces and moments are small in wind-tunnel tests (Potts & Crowther, 2002).
 use serde::{Deserialize, Serialize};
 
 use super::error::{check_range, AeroError};
 use super::linear::LinearCoefficients;
 use super::model::ModelInfo;
 use super::published::hummel_2003;
+use super::rates::RateTerms;
 
 /// Aspect ratio of a circular planform, b²/S = d²/(πd²/4) = 4/π.
 pub const CIRCULAR_ASPECT_RATIO: f64 = 4.0 / std::f64::consts::PI;
@@ -92,7 +96,7 @@ pub fn estimate_coefficients(shape: &WingShape) -> Result<LinearCoefficients, Ae
         drag_min_alpha_rad: zero_lift_alpha,
         pitch_at_zero: -pi * camber + 0.25 * lift_at_zero,
         pitch_slope_per_rad: 0.25 * lift_slope,
-        rates: hummel_2003().rates,
+        rates: RateTerms { roll_from_spin: 0.0, ..hummel_2003().rates },
     }
     .validated()
 }

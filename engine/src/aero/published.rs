@@ -36,6 +36,12 @@ const HUMMEL_ROLL_FROM_SPIN_HIS_AXES: f64 = 0.00171;
 /// C_M0 −0.0821, C_Mα 0.4338 /rad, C_Mq −0.005, C_Rr 0.00171, C_Rp −0.0144, C_Nr ≈ −7×10⁻⁶
 /// (rates in rad/s; damping terms low confidence). α0 of the drag term: 0 (his 6-DOF set is
 /// quadratic about α = 0 as we remember it). Converted to our axes as the module docs say.
+///
+/// Caution (measured in our flights, `hummel_sets_fly_a_typical_ultimate_throw_without_failing`):
+/// at 8 rev/s the roll-from-spin term C_Rr·r ≈ 0.086 outweighs C_M0, pitches the disc up and
+/// shortens a 14 m/s throw to about 12 m, which is implausible. The remembered value of C_Rr
+/// or its rate convention is probably wrong; verify against the thesis before trusting
+/// distances from this set.
 pub fn hummel_2003() -> LinearCoefficients {
     LinearCoefficients {
         info: ModelInfo { name: "Hummel (2003) linear model".into(), source: HUMMEL_SOURCE.into(), confidence: MEMORY.into() },
