@@ -14,8 +14,8 @@
 //! - Failures: non-finite loads or states, divergence guards, step-size collapse and step
 //!   limits end the flight with a [`FlightError`] naming the time and the quantity; no NaN is
 //!   ever returned.
-//! - Initial state from a [`crate::ReleaseState`]: see `release.rs` (documented construction of
-//!   **n**, **ṅ** and the velocity).
+//! - Initial state from a [`crate::ReleaseState`]: [`initial_state`] documents how the velocity,
+//!   **n**, **ṅ** and ω_s are constructed.
 mod conditions;
 mod error;
 mod fly;

@@ -1,19 +1,4 @@
 //! From a [`ReleaseState`] to the integrator's initial [`DiscState`].
-//!
-//! Construction (world frame x downrange, y left, z up; γ launch, ψ heading, ν nose, ρ roll,
-//! s = [`ReleaseState::fade_side`], +1 left):
-//! 1. velocity **v** = V (cos γ cos ψ, cos γ sin ψ, sin γ); **f** = **v**/V;
-//! 2. lateral (left) axis **l** = (−sin ψ, cos ψ, 0); the velocity's "up" **u** = **f** × **l**
-//!    (perpendicular to **v** in the vertical plane containing it);
-//! 3. nose: **n₀** = −sin ν **f** + cos ν **u** (the disc plane ν above the velocity, so the
-//!    angle of attack in still air equals ν);
-//! 4. roll about **f**: **n** = −sin ν **f** + cos ν (cos ρ **u** + s sin ρ **l**), so a positive
-//!    (hyzer) roll tilts **n** toward the fade side, i.e. lowers the fade-side edge;
-//! 5. spin ω_s = [`ReleaseState::signed_spin_rad_s`];
-//! 6. wobble: the transverse angular velocity **ω**⊥ = w (cos β **e_f** + sin β **e_l**), with
-//!    **e_f** the velocity's direction projected into the disc plane, **e_l** = **n** × **e_f**
-//!    (in-plane, to the left) and β = `off_axis_direction_rad`; then **ṅ** = **ω**⊥ × **n**;
-//! 7. position (0, 0, h): the release point is the origin of the ground plane.
 use nalgebra::{Rotation3, Unit, Vector3};
 
 use crate::dynamics::{DiscBody, DiscState};
@@ -21,20 +6,35 @@ use crate::throw::ReleaseState;
 
 use super::FlightError;
 
-/// The initial state of a flight, after checking the release values.
+/// The initial state of a flight, after checking the release values (typed errors naming the
+/// field, its value and the allowed range; a tilted rim that would start below the ground is
+/// rejected as a bad `height_m`).
+///
+/// Construction (world frame x downrange, y left, z up; γ launch, ψ heading, ν nose, ρ roll,
+/// s = [`ReleaseState::fade_side`], +1 left):
+/// 1. velocity **v** = V (cos γ cos ψ, cos γ sin ψ, sin γ); **f** = **v**/V;
+/// 2. lateral (left) axis **l** = (−sin ψ, cos ψ, 0); the velocity's "up" **u** = **f** × **l**
+///    (perpendicular to **v** in the vertical plane containing it);
+/// 3. nose: **n₀** = −sin ν **f** + cos ν **u** (the disc plane ν above the velocity, so the
+///    angle of attack in still air equals ν);
+/// 4. roll about **f**: **n** = −sin ν **f** + cos ν (cos ρ **u** + s sin ρ **l**), so a positive
+///    (hyzer) roll tilts **n** toward the fade side, i.e. lowers the fade-side edge;
+/// 5. spin ω_s = [`ReleaseState::signed_spin_rad_s`];
+/// 6. wobble: the transverse angular velocity **ω**⊥ = w (cos β **e_f** + sin β **e_l**), with
+///    **e_f** the velocity's direction projected into the disc plane, **e_l** = **n** × **e_f**
+///    (in-plane, to the left) and β = `off_axis_direction_rad`; then **ṅ** = **ω**⊥ × **n**;
+/// 7. position (0, 0, h): the release point is the origin of the ground plane.
 pub fn initial_state(body: &DiscBody, release: &ReleaseState) -> Result<DiscState, FlightError> {
     validate_release(release)?;
     let frame = ReleaseFrame::new(release.launch_rad, release.heading_rad);
     let normal = release_normal(&frame, release);
-    let normal_rate = Vector3::zeros();
-    let mut state = DiscState {
+    let state = DiscState {
         position_m: Vector3::new(0.0, 0.0, release.height_m),
         velocity_mps: frame.forward * release.speed_mps,
         normal,
-        normal_rate_per_s: normal_rate,
+        normal_rate_per_s: wobble_transverse_rate(&frame, release, &normal).cross(&normal),
         spin_rad_s: release.signed_spin_rad_s(),
     };
-    state.normal_rate_per_s = wobble_transverse_rate(&frame, release, &normal).cross(&normal);
     check_rim_above_ground(&state, body)?;
     Ok(state)
 }
