@@ -465,3 +465,37 @@ fn code_built_table_errors_do_not_mention_a_line() {
     assert!(!err.to_string().contains("line"), "{err}");
     assert!(csv_error("alpha_deg,lift,drag,pitch\n5,0,0.1,0\n0,0,0.1,0\n").to_string().starts_with("line 3: alpha_deg = 0"));
 }
+
+#[test]
+fn level_flight_release_starts_without_vertical_acceleration() {
+    // source: CHECKS.md, level-flight consistency V = √(2mg/(ρ A C_L)); common practice.
+    // The whole chain: release state → initial state → loads → equations of motion.
+    let air = AirProperties::sea_level_standard();
+    let g = STANDARD_GRAVITY_MPS2;
+    let [(_, _, body), ..] = demo_discs();
+    for (model, _) in all_models() {
+        for alpha_deg in [2.0f64, 5.0, 10.0] {
+            let lift = lift_at(model.as_ref(), alpha_deg.to_radians());
+            let speed = (2.0 * body.mass_kg * g / (air.density_kg_m3 * body.area_m2() * lift)).sqrt();
+            let release = ReleaseState {
+                speed_mps: speed,
+                launch_rad: 0.0,
+                nose_rad: alpha_deg.to_radians(),
+                ..amateur_release(0.0, Style::Backhand, Hand::Right)
+            };
+            let state = initial_state(&body, &release).expect("valid release");
+            let aero = aero_loads(
+                model.as_ref(),
+                &air,
+                body.diameter_m,
+                &state.velocity_mps,
+                &state.normal,
+                &state.angular_velocity_rad_s(),
+                state.spin_rad_s,
+            );
+            let loads = Loads { force_n: aero.force_n, moment_nm: aero.moment_nm };
+            let vertical_acceleration = state_derivative(&body, &state, &loads, g)[5];
+            assert!(vertical_acceleration.abs() < 1e-6 * g, "{} at {alpha_deg}°: {vertical_acceleration} m/s²", model.info().name);
+        }
+    }
+}
