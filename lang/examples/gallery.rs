@@ -37,8 +37,11 @@ fn gallery() -> Vec<(&'static str, MimeBundle)> {
     ]
 }
 
-/// An invented flight path: (time s, downrange m, lateral m, height m).
-fn demo_flight(carry_m: f64, turn_m: f64, fade_m: f64) -> Vec<(f64, f64, f64, f64)> {
+/// One sample of an invented flight: (time s, downrange m, lateral m, height m).
+type Sample = (f64, f64, f64, f64);
+
+/// An invented flight path.
+fn demo_flight(carry_m: f64, turn_m: f64, fade_m: f64) -> Vec<Sample> {
     (0..=120)
         .map(|step| {
             let s = step as f64 / 120.0;
@@ -50,7 +53,7 @@ fn demo_flight(carry_m: f64, turn_m: f64, fade_m: f64) -> Vec<(f64, f64, f64, f6
         .collect()
 }
 
-fn flights() -> Vec<(&'static str, Vec<(f64, f64, f64, f64)>)> {
+fn flights() -> Vec<(&'static str, Vec<Sample>)> {
     vec![
         ("P-7 one-piece", demo_flight(96.0, 9.0, 14.0)),
         ("P-7 rim-heavy", demo_flight(101.0, 4.0, 11.0)),

@@ -291,7 +291,7 @@ mod charts {
             .group("rim-heavy", vec![6945.0, 3520.0]);
         let text = svg::of(&chart.render());
         let doc = svg::parse(&text);
-        for wanted in ["moment of inertia (g·cm²)", "I_z", "I_x", "one-piece", "rim-heavy", "6180", "3150", "6945", "3520"] {
+        for wanted in ["moment of inertia (g·cm²)", "I_z", "I_x", "one-piece", "rim-heavy", "6180", "3150", "6945", "3520", "+12.4 %", "+11.7 %"] {
             assert!(svg::has_text(&doc, wanted), "missing {wanted:?}");
         }
         let bars = doc.descendants().filter(|n| n.has_tag_name("rect"))

@@ -38,17 +38,23 @@ pub(crate) fn body_px_for_plot(plot_height: f64) -> u32 {
 
 /// Builds axes over `bounds` in `area`, draws the plot background, grid, ticks and titles.
 pub(crate) fn draw_axes<'a, 'b>(area: &'a Area<'b>, bounds: Bounds, x: &Axis, y: &Axis) -> Result<Plot<'a, 'b>, Box<dyn std::error::Error>> {
-    draw_axes_with(area, bounds, x, y, 9)
+    draw_axes_with(area, bounds, x, y, (9, BOTTOM_AREA_PX))
 }
 
 /// As [`draw_axes`], with about `x_ticks` labelled ticks on the x axis (0: none, for charts
-/// that label categories themselves).
-pub(crate) fn draw_axes_with<'a, 'b>(area: &'a Area<'b>, bounds: Bounds, x: &Axis, y: &Axis, x_ticks: usize) -> Result<Plot<'a, 'b>, Box<dyn std::error::Error>> {
+/// that label categories themselves) and `bottom_px` pixels under the plot for them.
+pub(crate) fn draw_axes_with<'a, 'b>(
+    area: &'a Area<'b>,
+    bounds: Bounds,
+    x: &Axis,
+    y: &Axis,
+    (x_ticks, bottom_px): (usize, u32),
+) -> Result<Plot<'a, 'b>, Box<dyn std::error::Error>> {
     let mut chart = ChartBuilder::on(area)
         .margin_top(TOP_MARGIN_PX)
         .margin_left(LEFT_MARGIN_PX)
         .margin_right(RIGHT_MARGIN_PX)
-        .x_label_area_size(BOTTOM_AREA_PX)
+        .x_label_area_size(bottom_px)
         .y_label_area_size(LEFT_AREA_PX)
         .build_cartesian_2d(bounds.x0..bounds.x1, bounds.y0..bounds.y1)?;
     chart.plotting_area().fill(&PLOT_BACKGROUND)?;

@@ -54,7 +54,8 @@ impl HeatMap {
     }
 
     fn frame(&self) -> Frame {
-        let frame = Frame::new(&self.title).subtitle(format!("{} over {} and {}", self.value.label(), self.x.title, self.y.title));
+        let subtitle = format!("Each cell: {} at one {} and one {}", self.value.label(), self.x.label(), self.y.label());
+        let frame = Frame::new(&self.title).subtitle(subtitle);
         if self.cells().any(|(_, _, v)| !v.is_finite()) { frame.caption("Grey cells: no result for that combination.") } else { frame }
     }
 
@@ -87,11 +88,12 @@ impl HeatMap {
             let colour = if value.is_finite() { scale_colour((value - low) / (high - low)) } else { MISSING };
             plot.draw_series(std::iter::once(Rectangle::new([(xs[i], ys[j]), (xs[i + 1], ys[j + 1])], colour.filled())))?;
             plot.draw_series(std::iter::once(Rectangle::new([(xs[i], ys[j]), (xs[i + 1], ys[j + 1])], WHITE.stroke_width(1))))?;
-            if label && value.is_finite() {
-                let ink = if wants_dark_text(colour) { INK } else { WHITE.into() };
+            if label {
+                let ink = if wants_dark_text(colour) { INK } else { WHITE };
                 let style = font::anchored(font::text(SMALL_PX, ink), HPos::Center, VPos::Center);
                 let centre = (0.5 * (xs[i] + xs[i + 1]), 0.5 * (ys[j] + ys[j + 1]));
-                plot.draw_series(std::iter::once(EmptyElement::at(centre) + Text::new(short(value), (0, 0), style)))?;
+                let text = if value.is_finite() { short(value) } else { "no result".to_string() };
+                plot.draw_series(std::iter::once(EmptyElement::at(centre) + Text::new(text, (0, 0), style)))?;
             }
         }
         Ok(())

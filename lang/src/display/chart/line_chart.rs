@@ -64,7 +64,7 @@ impl LineChart {
             if self.zero_line {
                 draw_zero_line(&mut plot, bounds)?;
             }
-            draw_series(&mut plot, &self.series, |index| series_colour(index))
+            draw_series(&mut plot, &self.series, series_colour)
         })
     }
 }
@@ -115,7 +115,7 @@ pub(crate) fn draw_zero_line(plot: &mut Plot, bounds: Bounds) -> Drawn {
 
 /// A few lines of text describing the series: counts and ranges.
 pub(crate) fn series_summary(title: &str, x: &Axis, y: &Axis, series: &[Series]) -> String {
-    let mut lines = vec![format!("{title} — {} against {}, {} series", y.label(), x.label(), series.len())];
+    let mut lines = vec![format!("{title}: {} against {}, {} series", y.label(), x.label(), series.len())];
     for one in series {
         lines.push(match Bounds::of(one.finite_points()) {
             Some(b) => format!(

@@ -7,7 +7,7 @@ use super::data::Axis;
 use super::font;
 use super::frame::{Drawn, Frame};
 use super::legend::{LegendEntry, Swatch};
-use crate::display::style::{series_colour, AXIS_INK, INK, SMALL_PX, TEXT_PX};
+use crate::display::style::{series_colour, AXIS_INK, INK, MUTED_INK, SMALL_PX, TEXT_PX};
 use crate::display::Render;
 use crate::MimeBundle;
 use plotters::element::{EmptyElement, Rectangle, Text};
@@ -58,7 +58,8 @@ impl MassBars {
         let entries = self.quantities.iter().enumerate();
         let legend = entries.map(|(index, q)| LegendEntry::new(Swatch::Block(series_colour(index)), q.clone()));
         let frame = Frame::new(&self.title).legend(legend.collect());
-        frame.subtitle(format!("{} per design; the value is written on each bar", self.measure.label()))
+        let measure = capitalised(&self.measure.label());
+        frame.subtitle(format!("{measure} per design; grey: change against the first design"))
     }
 
     fn finite_values(&self) -> impl Iterator<Item = f64> + '_ {
@@ -73,9 +74,9 @@ impl MassBars {
         let top = values.y1.max(0.0);
         let low = values.y0.min(0.0);
         let span = (top - low).max(1e-9);
-        let bounds = Bounds { x0: 0.0, x1: self.groups.len() as f64, y0: low - 0.02 * span, y1: top + 0.14 * span };
+        let bounds = Bounds { x0: 0.0, x1: self.groups.len() as f64, y0: low - 0.02 * span, y1: top + 0.2 * span };
         self.frame().draw(axes::body_px_for_plot(PLOT_HEIGHT_PX), |area| {
-            let mut plot = axes::draw_axes_with(area, bounds, &Axis::new("", ""), &self.measure, 0)?;
+            let mut plot = axes::draw_axes_with(area, bounds, &Axis::new("", ""), &self.measure, (0, axes::BOTTOM_AREA_PX))?;
             for (index, group) in self.groups.iter().enumerate() {
                 self.draw_group(&mut plot, index, group, bounds)?;
             }
@@ -94,8 +95,13 @@ impl MassBars {
             if value.is_finite() {
                 let bar = Rectangle::new([(left + 0.06 * width, 0.0), (left + 0.94 * width, *value)], series_colour(q).filled());
                 plot.draw_series(std::iter::once(bar))?;
+                let top = (centre, value.max(0.0));
                 let text = format!("{value:.prec$}", prec = self.decimals);
-                plot.draw_series(std::iter::once(EmptyElement::at((centre, value.max(0.0))) + Text::new(text, (0, -3), label_style)))?;
+                plot.draw_series(std::iter::once(EmptyElement::at(top) + Text::new(text, (0, -3), label_style)))?;
+                if let Some(change) = self.change_label(index, q, *value) {
+                    let style = font::anchored(font::text(SMALL_PX, MUTED_INK), HPos::Center, VPos::Bottom);
+                    plot.draw_series(std::iter::once(EmptyElement::at(top) + Text::new(change, (0, -18), style)))?;
+                }
             } else {
                 plot.draw_series(std::iter::once(EmptyElement::at((centre, 0.0)) + Text::new("n/a", (0, -3), label_style)))?;
             }
@@ -105,6 +111,20 @@ impl MassBars {
         plot.draw_series(std::iter::once(name))?;
         Ok(())
     }
+}
+
+impl MassBars {
+    /// For designs after the first: the change against the first design, e.g. `+12.4 %`.
+    fn change_label(&self, group: usize, quantity: usize, value: f64) -> Option<String> {
+        let first = self.groups.first().and_then(|g| g.values.get(quantity)).copied()?;
+        (group > 0 && first.is_finite() && first != 0.0).then(|| format!("{:+.1} %", 100.0 * (value / first - 1.0)))
+    }
+}
+
+/// The text with its first letter in upper case.
+fn capitalised(text: &str) -> String {
+    let mut chars = text.chars();
+    chars.next().map_or(String::new(), |first| first.to_uppercase().chain(chars).collect())
 }
 
 impl Render for MassBars {

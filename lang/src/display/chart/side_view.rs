@@ -36,7 +36,7 @@ impl SideView {
     }
 
     fn frame(&self, stretch: Option<f64>) -> Frame {
-        let frame = Frame::new(&self.title).legend(track_legend(&self.tracks, false));
+        let frame = Frame::new(&self.title).legend(track_legend(&self.tracks, true));
         match stretch {
             Some(s) if s > 1.05 => frame.subtitle(format!("Height drawn {s:.1}× taller than downrange distance")),
             _ => frame.subtitle("Height and downrange distance at the same scale"),

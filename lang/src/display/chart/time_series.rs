@@ -4,7 +4,7 @@
 use super::axes;
 use super::bounds::Bounds;
 use super::data::{Axis, Series};
-use super::frame::Frame;
+use super::frame::{Area, Drawn, Frame};
 use super::legend::{LegendEntry, Swatch};
 use super::line_chart::{draw_series, draw_zero_line, series_bounds, series_summary};
 use crate::display::style::series_colour;
@@ -12,6 +12,8 @@ use crate::display::Render;
 use crate::MimeBundle;
 
 const PANEL_PLOT_PX: f64 = 130.0;
+/// Room under a panel that is not the last one: tick labels only.
+const INNER_BOTTOM_PX: u32 = 26;
 
 /// One panel: a quantity with its unit and one series per flight (x = time in s).
 #[derive(Debug, Clone, PartialEq)]
@@ -80,34 +82,46 @@ impl TimeSeries {
         let Some(time) = Bounds::of(panels.iter().flat_map(|(_, b)| [(b.x0, 0.0), (b.x1, 0.0)])) else {
             return self.frame().no_data("no finite points in any panel");
         };
-        let panel_px = axes::body_px_for_plot(PANEL_PLOT_PX);
+        let time = time.padded(0.0, 0.5);
         let labels = self.labels();
-        self.frame().draw(panel_px * panels.len() as u32, |area| {
-            let last = panels.len() - 1;
-            for (index, ((panel, bounds), cell)) in panels.iter().zip(area.split_evenly((panels.len(), 1))).enumerate() {
-                let time_axis = if index == last { Axis::new("time since release", "s") } else { Axis::new("", "") };
-                let bounds = Bounds { x0: time.x0, x1: time.x1, ..*bounds }.padded(0.04, 1.0);
-                let bounds = Bounds { x0: time.x0, x1: time.x1, ..bounds };
-                let mut plot = axes::draw_axes(&cell, bounds, &time_axis, &panel.quantity)?;
-                if bounds.y0 < 0.0 && bounds.y1 > 0.0 {
-                    draw_zero_line(&mut plot, bounds)?;
-                }
-                let colour = |index: usize| {
-                    let label = &panel.series[index].label;
-                    series_colour(labels.iter().position(|l| l == label).unwrap_or(index))
-                };
-                draw_series(&mut plot, &panel.series, colour)?;
+        let inner_px = PANEL_PLOT_PX as u32 + axes::TOP_MARGIN_PX + INNER_BOTTOM_PX;
+        let body_px = axes::body_px_for_plot(PANEL_PLOT_PX) + inner_px * (panels.len() as u32 - 1);
+        self.frame().draw(body_px, |area| {
+            let mut rest = area.clone();
+            for (index, (panel, bounds)) in panels.iter().enumerate() {
+                let last = index + 1 == panels.len();
+                let (cell, below) = if last { (rest.clone(), rest.clone()) } else { rest.split_vertically(inner_px) };
+                rest = below;
+                let bounds = Bounds { x0: time.x0, x1: time.x1, ..bounds.padded(0.04, 1.0) };
+                self.draw_panel(&cell, panel, bounds, &labels, last)?;
             }
             Ok(())
         })
+    }
+
+    fn draw_panel(&self, cell: &Area, panel: &Panel, bounds: Bounds, labels: &[String], last: bool) -> Drawn {
+        let (time_axis, bottom_px) =
+            if last { (Axis::new("time since release", "s"), axes::BOTTOM_AREA_PX) } else { (Axis::new("", ""), INNER_BOTTOM_PX) };
+        let mut plot = axes::draw_axes_with(cell, bounds, &time_axis, &panel.quantity, (9, bottom_px))?;
+        if bounds.y0 < 0.0 && bounds.y1 > 0.0 {
+            draw_zero_line(&mut plot, bounds)?;
+        }
+        let colour = |index: usize| {
+            let label = &panel.series[index].label;
+            series_colour(labels.iter().position(|l| l == label).unwrap_or(index))
+        };
+        draw_series(&mut plot, &panel.series, colour)
     }
 }
 
 impl Render for TimeSeries {
     fn render(&self) -> MimeBundle {
         let time = Axis::new("time", "s");
-        let parts = self.panels.iter().map(|p| series_summary(&self.title, &time, &p.quantity, &p.series));
-        let summary = if self.panels.is_empty() { format!("{} — no panels", self.title) } else { parts.collect::<Vec<_>>().join("\n") };
+        let mut lines = vec![format!("{} — {} panel(s) against {}", self.title, self.panels.len(), time.label())];
+        for panel in &self.panels {
+            lines.push(series_summary(&panel.quantity.label(), &time, &panel.quantity, &panel.series));
+        }
+        let summary = lines.join("\n");
         MimeBundle::plain(summary).with("image/svg+xml", self.to_svg())
     }
 }
