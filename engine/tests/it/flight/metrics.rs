@@ -76,3 +76,25 @@ fn default_tolerances_land_within_a_millimetre_of_precise_ones() {
         assert!((a.metrics.time_aloft_s - b.metrics.time_aloft_s).abs() < 1e-4);
     }
 }
+
+#[test]
+fn metrics_do_not_depend_on_the_release_heading_in_calm_air() {
+    // common practice, no published source: rotational symmetry about the vertical in calm air
+    let body = hummel_body();
+    let r = release(23.0, 88.0, 0.16, 0.02, -0.2);
+    let s = FlightSettings::precise();
+    let a = fly(&body, &LinearTestModel, &r, &FlightConditions::default(), &s).unwrap().metrics;
+    let b = fly(&body, &LinearTestModel, &ReleaseState { heading_rad: 0.7, ..r }, &FlightConditions::default(), &s).unwrap().metrics;
+    for (x, y) in [
+        (a.carry_m, b.carry_m),
+        (a.turn_m, b.turn_m),
+        (a.fade_m, b.fade_m),
+        (a.apex_m, b.apex_m),
+        (a.heading_change_rad, b.heading_change_rad),
+        (a.landing_lateral_m, b.landing_lateral_m),
+        (a.landing_downrange_m, b.landing_downrange_m),
+    ] {
+        assert!((x - y).abs() < 1e-6, "{x} vs {y}");
+    }
+    assert!((b.landing_position_m.y.atan2(b.landing_position_m.x) - a.landing_position_m.y.atan2(a.landing_position_m.x) - 0.7).abs() < 1e-8);
+}
