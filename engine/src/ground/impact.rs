@@ -232,3 +232,17 @@ fn final_fraction(u_n: f64, delta: f64, dpn: f64, remaining_j: f64) -> f64 {
         1.0
     }
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn the_final_fraction_lands_exactly_on_the_remaining_work() {
+        // work of a partial step with linear u_n: f dp (u_n + ½ f Δ)
+        let (u_n, delta, dpn, remaining) = (0.3, 0.2, 0.01, 0.002);
+        let f = final_fraction(u_n, delta, dpn, remaining);
+        assert!((f * dpn * (u_n + 0.5 * f * delta) - remaining).abs() < 1e-15);
+        assert_eq!(final_fraction(0.0, 0.0, 0.01, 1.0), 1.0);
+    }
+}

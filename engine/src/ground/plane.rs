@@ -121,3 +121,26 @@ impl GroundPlane {
         v - k * v.dot(&k)
     }
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn points_on_the_plane_have_zero_distance_and_the_normal_is_perpendicular() {
+        // source: common practice, no published source (analytic geometry of a plane).
+        let plane = GroundPlane::new(0.4, 12f64.to_radians(), 2.5).expect("valid");
+        let on = |x: f64, y: f64| Vector3::new(x, y, plane.height_at_m(x, y));
+        assert!(plane.distance_m(&on(3.0, -7.0)).abs() < 1e-12);
+        assert!((on(3.0, -7.0) - on(-2.0, 5.0)).dot(&plane.normal()).abs() < 1e-12);
+        assert!((plane.normal().z - 12f64.to_radians().cos()).abs() < 1e-15);
+        // Downhill really is down.
+        assert!(plane.height_at_m(plane.downhill().x, plane.downhill().y) < plane.height_at_origin_m());
+    }
+
+    #[test]
+    fn negative_slopes_are_rejected_with_a_hint() {
+        let error = GroundPlane::new(0.0, -0.1, 0.0).expect_err("negative");
+        assert!(error.to_string().contains("downhill direction"));
+    }
+}

@@ -32,3 +32,20 @@ pub fn lowest_rim_point(plane: &GroundPlane, centre_m: &Vector3<f64>, n: &Vector
     let arm_m = if tilt_sine > FLAT_TILT_SINE { -k_perp * (radius_m / tilt_sine) } else { Vector3::zeros() };
     RimContact { arm_m, gap_m: plane.distance_m(centre_m) - radius_m * tilt_sine, tilt_sine }
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn a_flat_disc_touches_at_its_centre_and_an_upright_one_at_the_bottom() {
+        // source: common practice, no published source (geometry of a circle over a plane).
+        let plane = GroundPlane::default();
+        let flat = lowest_rim_point(&plane, &Vector3::new(0.0, 0.0, 0.2), &Vector3::z(), 0.1);
+        assert_eq!(flat.arm_m, Vector3::zeros());
+        assert!((flat.gap_m - 0.2).abs() < 1e-15);
+        let upright = lowest_rim_point(&plane, &Vector3::new(0.0, 0.0, 0.2), &Vector3::y(), 0.1);
+        assert!((upright.arm_m - Vector3::new(0.0, 0.0, -0.1)).norm() < 1e-15);
+        assert!((upright.gap_m - 0.1).abs() < 1e-15);
+    }
+}

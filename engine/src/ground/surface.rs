@@ -185,3 +185,21 @@ impl From<SurfacePreset> for Surface {
         preset.surface()
     }
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn every_preset_is_valid_and_found_by_its_name() {
+        for preset in SurfacePreset::ALL {
+            let surface = preset.surface();
+            let checked = Surface::new(surface.friction(), surface.restitution(), surface.rolling_resistance());
+            assert!(checked.is_ok(), "{preset:?}");
+            assert_eq!(SurfacePreset::from_name(preset.name()), Ok(preset));
+            assert!(preset.source().starts_with("approximate"));
+        }
+        let unknown = SurfacePreset::from_name("ice").expect_err("unknown");
+        assert!(unknown.to_string().contains("short_grass"));
+    }
+}

@@ -436,3 +436,17 @@ proptest! {
         }
     }
 }
+
+#[test]
+fn downhill_ground_lengthens_ground_play_and_uphill_ground_shortens_it() {
+    // source: common practice, no published source (gravity's pull along the slope).
+    let play_on = |azimuth_rad: f64| {
+        let plane = GroundPlane::new(0.0, 8f64.to_radians(), azimuth_rad).expect("valid");
+        let velocity = plane.tangential(&Vector3::x()).normalize() * 6.0;
+        let start = ContactState { position_m: Vector3::zeros(), velocity_mps: velocity, normal: plane.normal(), angular_velocity_rad_s: plane.normal() * -50.0 };
+        play(&Ground::new(plane, SurfacePreset::ShortGrass), &start).ground_play_m
+    };
+    let level = play(&Ground::level(SurfacePreset::ShortGrass), &landing(Vector3::new(6.0, 0.0, 0.0), Vector3::z(), -50.0)).ground_play_m;
+    let (downhill, uphill) = (play_on(0.0), play_on(std::f64::consts::PI));
+    assert!(downhill > level && level > uphill, "downhill {downhill} m, level {level} m, uphill {uphill} m");
+}
