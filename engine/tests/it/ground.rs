@@ -6,7 +6,7 @@ use rand_chacha::ChaCha8Rng;
 use spinfoil_engine::{
     demo_driver, fly_to_rest, lowest_rim_point, play_out_landing, resolve_impact, ContactBody, ContactState, DiscBody,
     FlightConditions, FlightSettings, FlightToRest, Ground, GroundEnding, GroundError, GroundPhase, GroundPlane,
-    GroundPlay, GroundSettings, Hand, ReleaseState, Style, Surface, SurfacePreset, STANDARD_GRAVITY_MPS2,
+    GroundPlay, GroundSample, GroundSettings, Hand, ReleaseState, Style, Surface, SurfacePreset, STANDARD_GRAVITY_MPS2,
 };
 
 use crate::common::rel_diff;
@@ -449,4 +449,24 @@ fn downhill_ground_lengthens_ground_play_and_uphill_ground_shortens_it() {
     let level = play(&Ground::level(SurfacePreset::ShortGrass), &landing(Vector3::new(6.0, 0.0, 0.0), Vector3::z(), -50.0)).ground_play_m;
     let (downhill, uphill) = (play_on(0.0), play_on(std::f64::consts::PI));
     assert!(downhill > level && level > uphill, "downhill {downhill} m, level {level} m, uphill {uphill} m");
+}
+
+#[test]
+fn sliding_and_spinning_stop_together() {
+    // source: Farkas, Bartels, Unger & Wolf (2003), Frictional coupling between sliding and
+    // spinning motion, Phys. Rev. Lett. 90, 248302 (for a ring or disc contact both motions
+    // come to rest at the same moment, whatever the starting mix).
+    let ground = Ground::level(SurfacePreset::PackedDirt);
+    for spin in [-20.0, -60.0, -150.0] {
+        let result = play(&ground, &landing(Vector3::new(5.0, 0.0, 0.0), Vector3::z(), spin));
+        let sliding: Vec<_> = result.samples.iter().filter(|s| s.phase == GroundPhase::Sliding).collect();
+        let first_below = |f: &dyn Fn(&GroundSample) -> f64| {
+            let start = f(sliding[0]);
+            sliding.iter().find(|s| f(s) < 0.05 * start).map_or(result.time_to_rest_s, |s| s.time_s)
+        };
+        let slide_ends = first_below(&|s| s.velocity_mps.norm());
+        let spin_ends = first_below(&|s| s.spin_rad_s.abs());
+        assert!((slide_ends - spin_ends).abs() < 0.1 * result.time_to_rest_s, "slide {slide_ends} s, spin {spin_ends} s");
+        assert!(result.samples.iter().rev().nth(1).is_some_and(|s| s.spin_rad_s.abs() < 0.1 * spin.abs()));
+    }
 }
