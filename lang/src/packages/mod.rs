@@ -1,6 +1,7 @@
 //! The domain packages: one module per object, each registering its functions with their docs.
 mod aero_choice;
 mod args;
+mod charts;
 mod compare;
 mod discs;
 mod environments;
@@ -45,6 +46,7 @@ pub(crate) fn register_packages(reg: &mut Registrar, context: &PackageContext) {
     environments::register(reg);
     flights::register(reg);
     tables::register(reg);
+    charts::register(reg);
     show::register(reg, context);
     crate::files::register(reg, context.study_dir.clone());
 }
@@ -57,6 +59,9 @@ pub(crate) fn render_domain(value: &Dynamic) -> Option<MimeBundle> {
     }
     if let Some(disc) = value.read_lock::<discs::DiscValue>() {
         return Some(compare::mass_table(std::slice::from_ref(&*disc)).render());
+    }
+    if let Some(chart) = value.read_lock::<charts::ChartValue>() {
+        return Some(chart.bundle.clone());
     }
     if let Some(flight) = value.read_lock::<flights::FlightValue>() {
         return Some(compare::flight_table(std::slice::from_ref(&*flight)).render());

@@ -88,13 +88,13 @@ pub(crate) fn register(reg: &mut Registrar) {
     reg.doc(FnDoc::new(
         "effort(options: map) -> Throw",
         "A throw described by the player's work: work_j with torque_nm and wrist_deg (linear and wrist work given separately) or with rim_speed_ratio (one work shared by a rim-speed ratio). Each disc's mass and spin inertia turn it into its own speed and spin.",
-        "let arm = effort(#{ style: \"backhand\", work_j: 48, torque_nm: 1.1, wrist_deg: 140, launch_deg: 9, hyzer_deg: 4 });",
+        "let arm = effort(#{ style: \"backhand\", work_j: 165, torque_nm: 2.5, wrist_deg: 140, launch_deg: 9, hyzer_deg: 4 });",
     ).with_options(&effort_options()));
     reg.engine.register_fn("release_for", release_for);
     reg.doc(FnDoc::new(
         "release_for(throw: Throw, disc: Disc) -> Throw",
         "The release state a throw gives one disc (for an effort: the speed and spin this disc's mass and inertia give).",
-        "effort(#{ work_j: 48, torque_nm: 1.1, wrist_deg: 140 }).release_for(d).speed_mps",
+        "effort(#{ work_j: 165, torque_nm: 2.5, wrist_deg: 140 }).release_for(d).speed_mps",
     ));
     register_fields(reg);
 }

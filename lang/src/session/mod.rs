@@ -90,3 +90,25 @@ impl Session {
         self.functions.iter_functions().map(|f| (f.name.to_string(), f.params.iter().map(|p| p.to_string()).collect())).collect()
     }
 }
+
+impl Session {
+    /// Names of the functions our packages registered that have no doc string (should be
+    /// empty; a test holds it so). Field getters and `to_string` are documented as fields.
+    pub fn undocumented_functions(&self) -> Vec<String> {
+        self.registered_functions().into_iter().filter(|name| self.docs.find(name).is_empty()).collect()
+    }
+
+    /// Names of the functions our packages registered (not Rhai's standard ones), sorted.
+    pub fn registered_functions(&self) -> Vec<String> {
+        let mut names: Vec<String> = self
+            .engine
+            .gen_fn_signatures(false)
+            .into_iter()
+            .filter_map(|sig| sig.split('(').next().map(str::to_string))
+            .filter(|name| !name.starts_with("get$") && !name.starts_with("set$") && name != "to_string")
+            .collect();
+        names.sort();
+        names.dedup();
+        names
+    }
+}

@@ -328,3 +328,32 @@ fn without_a_study_folder_scripts_touch_no_files() {
     assert!(e.message.contains("file access is off"), "{}", e.message);
     assert!(error(&mut s, "load_disc(\"a.json\")").message.contains("file access is off"));
 }
+
+#[test]
+fn charts_of_flights_and_discs_render_svg() {
+    let mut s = session();
+    value(&mut s, TWO_DISCS);
+    value(&mut s, "let t = throw_release(#{ speed_mps: 24, spin_rpm: 900, launch_deg: 10 }); let a = fly(one_piece, t); let b = fly(rim_heavy, t);");
+    let sink = std::sync::Arc::new(spinfoil_lang::CollectedOutput::default());
+    for cell in ["plan_view([a, b])", "side_view(a)", "time_series([a, b])", "cross_section(rim_heavy)", "mass_bars([one_piece, rim_heavy])", "coefficient_curves(one_piece)"] {
+        let bundle = s.eval(cell, sink.clone()).unwrap().unwrap();
+        let svg = &bundle.data["image/svg+xml"];
+        assert!(svg.contains("<svg"), "{cell}");
+        assert!(svg.contains("P-7 one-piece") || svg.contains("P-7 rim-heavy"), "{cell}: legend or title names the design");
+    }
+    assert!(value(&mut s, "plan_view([a, b]).to_svg()").starts_with("<svg") || value(&mut s, "plan_view([a, b]).to_svg()").contains("<svg"));
+    let e = error(&mut s, "plan_view([])");
+    assert!(e.message.contains("give at least one Flight"), "{}", e.message);
+}
+
+#[test]
+fn show_sends_a_display_and_flights_render_a_table() {
+    let mut s = session();
+    value(&mut s, TWO_DISCS);
+    let sink = std::sync::Arc::new(spinfoil_lang::CollectedOutput::default());
+    let result = s.eval("show(compare_mass([one_piece, rim_heavy])); let f = fly(one_piece, throw_release(#{ speed_mps: 20, spin_rpm: 800 })); f", sink.clone()).unwrap().unwrap();
+    assert!(result.data["text/html"].contains("carry"));
+    assert!(result.text_plain().unwrap().contains("Keep clear of the throwing lane"));
+    let events = sink.take();
+    assert!(matches!(&events[0], spinfoil_lang::OutputEvent::Display(b, None) if b.data.contains_key("text/html")));
+}

@@ -180,3 +180,31 @@ fn help_works_in_language() {
     assert!(value(&mut s, "help(\"show\")").contains("Example:"));
     assert!(value(&mut s, "help(\"shwo\")").contains("Did you mean 'show'"));
 }
+
+#[test]
+fn every_registered_function_has_a_doc() {
+    let s = session();
+    let registered = s.registered_functions();
+    assert!(registered.contains(&"fly".to_string()) && registered.contains(&"material".to_string()), "{registered:?}");
+    assert!(!registered.contains(&"sin".to_string()), "Rhai's standard functions are not ours");
+    assert_eq!(s.undocumented_functions(), Vec::<String>::new());
+}
+
+#[test]
+fn every_doc_has_a_signature_with_parentheses_and_an_example() {
+    let s = session();
+    for doc in &s.docs().functions {
+        assert!(doc.signature.contains('(') && !doc.summary.is_empty(), "{doc:?}");
+        assert!(!doc.example.is_empty(), "{} has no example", doc.name);
+    }
+}
+
+/// The reference page is generated from the doc strings; regenerate it with
+/// `cargo run -p spinfoil-lang --example reference > docs/reference.md`.
+#[test]
+fn the_reference_page_is_current() {
+    let path = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("../docs/reference.md");
+    let committed = std::fs::read_to_string(&path).unwrap_or_default();
+    let generated = session().docs().reference_markdown();
+    assert!(committed == generated, "docs/reference.md is stale: run `cargo run -p spinfoil-lang --example reference > docs/reference.md`");
+}
