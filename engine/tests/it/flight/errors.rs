@@ -81,3 +81,13 @@ fn a_disc_that_never_lands_is_reported() {
     let e = fly_with(&hummel_body(), &LinearTestModel, &r, &vacuum(0.0), &s);
     assert_eq!(e, FlightError::NoLanding { max_time_s: 2.0 });
 }
+
+#[test]
+fn a_step_limit_is_reported_with_its_time() {
+    let r = release(20.0, 80.0, 0.1, 0.0, 0.0);
+    let s = FlightSettings { max_steps: 5, ..FlightSettings::default() };
+    match fly_with(&hummel_body(), &LinearTestModel, &r, &FlightConditions::default(), &s) {
+        FlightError::TooManySteps { time_s, max_steps: 5 } => assert!(time_s > 0.0 && time_s < 1.0),
+        other => panic!("expected the step limit, got {other:?}"),
+    }
+}
