@@ -18,8 +18,8 @@ pub enum DiscFamily {
 /// Invented values in the usual range of the sport, no published source.
 pub(crate) fn family_defaults(family: DiscFamily) -> [f64; 8] {
     match family {
-        DiscFamily::Putter => [0.212, 0.0100, 0.0150, 0.0100, 0.0022, 0.0010, 0.0040, 0.0080],
-        DiscFamily::Midrange => [0.215, 0.0130, 0.0130, 0.0080, 0.0020, 0.0015, 0.0030, 0.0060],
-        DiscFamily::Driver => [0.211, 0.0220, 0.0110, 0.0060, 0.0018, 0.0020, 0.0022, 0.0040],
+        DiscFamily::Putter => [0.212, 0.0100, 0.0150, 0.0100, 0.0022, 0.0010, 0.0040, 0.0065],
+        DiscFamily::Midrange => [0.215, 0.0130, 0.0130, 0.0080, 0.0020, 0.0015, 0.0030, 0.0050],
+        DiscFamily::Driver => [0.211, 0.0220, 0.0120, 0.0075, 0.0019, 0.0020, 0.0022, 0.0048],
     }
 }

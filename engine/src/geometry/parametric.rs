@@ -10,10 +10,10 @@ use serde::{Deserialize, Serialize};
 ///   centre along a circular arc with a horizontal tangent on the axis;
 /// - the rim, `rim_width_m` wide: a vertical inner wall from the plate underside down to a
 ///   rounded corner (radius 0.2·min(rim width, rim depth)) at the rim bottom, then the rim
-///   underside, a quarter ellipse rising to the nose;
+///   underside, a smooth step (z ∝ 3t² − 2t³, horizontal at both ends) rising to the nose;
 /// - the nose: `rim_thickness_m` tall at the outer edge, centred on `parting_line_height_m`,
 ///   its corners rounded with `leading_edge_radius_m`;
-/// - the shoulder: a quarter ellipse from the top of the nose up to the top of the plate at the
+/// - the shoulder: a smooth step from the top of the nose up to the top of the plate at the
 ///   inner rim wall.
 ///
 /// Each dimension is checked against the others ([`ParametricOutline::allowed_range_m`]).

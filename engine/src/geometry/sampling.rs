@@ -17,6 +17,10 @@ impl Default for SamplingSettings {
     }
 }
 
+/// Equal steps a smooth step starts from before adaptive halving.
+const INITIAL_STEPS: usize = 8;
+/// Most halvings of one step of a smooth step.
+const MAX_REFINEMENTS: u32 = 12;
 /// Most chords one curve is split into, whatever the tolerance.
 const MAX_CHORDS_PER_CURVE: usize = 4096;
 
@@ -72,6 +76,40 @@ impl SamplingSettings {
             .collect()
     }
 
+    /// Points of a smooth step from `from` to `to`: r runs linearly and z follows
+    /// 3t² − 2t³, so the curve leaves and arrives horizontally (tangent-continuous with the
+    /// rounded corners it joins). Sampled adaptively: 8 equal steps, each halved until the
+    /// curve's midpoint lies within the chord tolerance of its chord. Both ends included.
+    pub(crate) fn smooth_step(&self, from: RzPoint, to: RzPoint) -> Vec<RzPoint> {
+        let at = |t: f64| {
+            let s = t * t * (3.0 - 2.0 * t);
+            RzPoint::new(from.r_m + (to.r_m - from.r_m) * t, from.z_m + (to.z_m - from.z_m) * s)
+        };
+        let mut points = vec![from];
+        for k in 0..INITIAL_STEPS {
+            let (t0, t1) = (k as f64 / INITIAL_STEPS as f64, (k + 1) as f64 / INITIAL_STEPS as f64);
+            self.refine(&at, t0, t1, MAX_REFINEMENTS, &mut points);
+        }
+        let last = points.len() - 1;
+        points[last] = to;
+        points
+    }
+
+    /// Appends the points after `t0` up to `t1`, halving while the midpoint is off the chord.
+    fn refine(&self, at: &dyn Fn(f64) -> RzPoint, t0: f64, t1: f64, depth: u32, out: &mut Vec<RzPoint>) {
+        let (a, b, mid_t) = (at(t0), at(t1), 0.5 * (t0 + t1));
+        let mid = at(mid_t);
+        let chord = b.minus(a);
+        let length = chord.dot(chord).sqrt();
+        let off = if length > 0.0 { chord.cross(mid.minus(a)).abs() / length } else { 0.0 };
+        if depth > 0 && off > self.chord_tolerance_m {
+            self.refine(at, t0, mid_t, depth - 1, out);
+            self.refine(at, mid_t, t1, depth - 1, out);
+        } else {
+            out.push(b);
+        }
+    }
+
     /// Points of a domed surface from the axis (height `z_axis_m`) down to (`r_edge_m`,
     /// `z_axis_m − dome_m`): a circular arc with a horizontal tangent on the axis. A flat
     /// surface when `dome_m` is 0. Ordered from the axis outward.
@@ -103,6 +141,21 @@ mod tests {
         let step = std::f64::consts::PI / (pts.len() - 1) as f64;
         let sagitta = 0.01 * (1.0 - (step / 2.0).cos());
         assert!(sagitta <= s.chord_tolerance_m * (1.0 + 1e-12));
+    }
+
+    #[test]
+    fn smooth_step_stays_within_tolerance_of_its_chords() {
+        let s = SamplingSettings::default();
+        let (a, b) = (RzPoint::new(0.08, 0.0), RzPoint::new(0.1, 0.003));
+        let pts = s.smooth_step(a, b);
+        assert_eq!((pts[0], pts[pts.len() - 1]), (a, b));
+        // Every curve point between two samples lies within the tolerance of their chord.
+        for w in pts.windows(2) {
+            let t_mid = ((w[0].r_m + w[1].r_m) / 2.0 - a.r_m) / (b.r_m - a.r_m);
+            let z_mid = a.z_m + (b.z_m - a.z_m) * t_mid * t_mid * (3.0 - 2.0 * t_mid);
+            let chord_z = (w[0].z_m + w[1].z_m) / 2.0;
+            assert!((z_mid - chord_z).abs() <= 1.5 * s.chord_tolerance_m, "{} vs {}", z_mid, chord_z);
+        }
     }
 
     #[test]

@@ -49,8 +49,7 @@ impl ParametricOutline {
         let mut pts = s.dome(ri, d + self.dome_height_m, self.dome_height_m);
         pts.extend(s.elliptic_arc(RzPoint::new(ri + k, k), k, k, PI, 1.5 * PI));
         let nose_inner_r = self.diameter_m / 2.0 - self.leading_edge_radius_m;
-        let (a, b) = (nose_inner_r - (ri + k), self.nose_bottom_m());
-        pts.extend(s.elliptic_arc(RzPoint::new(ri + k, b), a, b, -FRAC_PI_2, 0.0));
+        pts.extend(s.smooth_step(RzPoint::new(ri + k, 0.0), RzPoint::new(nose_inner_r, self.nose_bottom_m())));
         pts
     }
 
@@ -70,9 +69,8 @@ impl ParametricOutline {
     fn top(&self, s: &SamplingSettings) -> Vec<RzPoint> {
         let ri = self.plate_radius_m();
         let plate_top = self.rim_depth_m + self.plate_thickness_m;
-        let a = self.diameter_m / 2.0 - self.leading_edge_radius_m - ri;
-        let b = plate_top - self.nose_top_m();
-        let mut pts = s.elliptic_arc(RzPoint::new(ri, self.nose_top_m()), a, b, 0.0, FRAC_PI_2);
+        let nose_inner_r = self.diameter_m / 2.0 - self.leading_edge_radius_m;
+        let mut pts = s.smooth_step(RzPoint::new(nose_inner_r, self.nose_top_m()), RzPoint::new(ri, plate_top));
         let mut dome = s.dome(ri, plate_top + self.dome_height_m, self.dome_height_m);
         dome.reverse();
         pts.extend(dome);

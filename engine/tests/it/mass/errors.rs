@@ -72,7 +72,7 @@ fn dimensions_are_checked_against_each_other() {
     let cases = [
         (Dimension::RimWidth, 0.2, "rim width"),
         (Dimension::PlateThickness, 0.02, "plate thickness"),
-        (Dimension::LeadingEdgeRadius, 0.004, "leading-edge radius"),
+        (Dimension::LeadingEdgeRadius, 0.005, "leading-edge radius"),
     ];
     for (dimension, value, name) in cases {
         let err = ParametricOutline::new(DiscFamily::Driver).with(dimension, value).build(&s).expect_err(name);
@@ -83,9 +83,9 @@ fn dimensions_are_checked_against_each_other() {
         assert!(value_m > max_m && min_m <= max_m, "{err}");
         assert!(err.to_string().contains(name), "{err}");
     }
-    // Leading-edge radius over half the rim thickness (6 mm nose): allowed up to 3 mm.
-    let p = ParametricOutline::new(DiscFamily::Driver).with(Dimension::LeadingEdgeRadius, 0.004);
-    assert_eq!(p.allowed_range_m(Dimension::LeadingEdgeRadius).1, 0.003);
+    // Leading-edge radius over half the rim thickness (7.5 mm nose): allowed up to 3.75 mm.
+    let p = ParametricOutline::new(DiscFamily::Driver).with(Dimension::LeadingEdgeRadius, 0.005);
+    assert_eq!(p.allowed_range_m(Dimension::LeadingEdgeRadius).1, 0.0075 / 2.0);
 }
 
 fn two_regions(a: RegionBounds, b: RegionBounds) -> Layup {
