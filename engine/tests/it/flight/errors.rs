@@ -91,3 +91,23 @@ fn a_step_limit_is_reported_with_its_time() {
         other => panic!("expected the step limit, got {other:?}"),
     }
 }
+
+/// A model that never gives a number.
+#[derive(Debug)]
+struct AlwaysNan;
+
+impl AeroModel for AlwaysNan {
+    fn coefficients(&self, _: &AeroInput) -> AeroCoefficients {
+        AeroCoefficients { lift: f64::NAN, ..AeroCoefficients::default() }
+    }
+    fn info(&self) -> ModelInfo {
+        ModelInfo { name: "always NaN".into(), source: "absurd test model".into(), confidence: "test".into() }
+    }
+}
+
+#[test]
+fn a_model_that_fails_at_release_is_reported_at_time_zero() {
+    let r = release(20.0, 80.0, 0.1, 0.0, 0.0);
+    let e = fly_with(&hummel_body(), &AlwaysNan, &r, &FlightConditions::default(), &FlightSettings::default());
+    assert_eq!(e, FlightError::NonFinite { time_s: 0.0, quantity: "aerodynamic force" });
+}
