@@ -175,5 +175,7 @@ fn validate_settings(settings: &GroundSettings) -> Result<(), GroundError> {
     finite("skip threshold speed (m/s)", settings.skip_min_speed_mps)?;
     finite("rolling tilt threshold (rad)", settings.roll_min_tilt_rad)?;
     finite("rest speed (m/s)", settings.rest_speed_mps)?;
+    finite("settling tilt threshold (rad)", settings.settle_max_tilt_rad)?;
+    finite("minimum skip flight time (s)", settings.min_flight_s)?;
     Ok(())
 }
