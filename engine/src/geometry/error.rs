@@ -12,6 +12,14 @@ pub enum GeometryError {
         /// Number of distinct points given.
         count: usize,
     },
+    /// A polygon has more points than this use of it accepts.
+    #[error("the polygon has {count} points; at most {max} are accepted here")]
+    TooManyPoints {
+        /// Points given.
+        count: usize,
+        /// Most accepted.
+        max: usize,
+    },
     /// A coordinate is NaN or infinite.
     #[error("point {index} of the outline is not finite (r = {r_m} m, z = {z_m} m); coordinates must be finite numbers")]
     NotFinite {

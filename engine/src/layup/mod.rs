@@ -12,4 +12,4 @@ pub use error::LayupError;
 pub use fill::{fill_outline, FilledRegion};
 pub use layup::Layup;
 pub use material::Material;
-pub use region::{Region, RegionBounds, RegionShape};
+pub use region::{Region, RegionBounds, RegionShape, MAX_REGION_POINTS};

@@ -1,8 +1,11 @@
 use super::{LayupError, Material};
 use crate::geometry::clip::{convex_planes, HalfPlane};
 use crate::geometry::triangulate::triangulate;
-use crate::geometry::{checked_polygon, signed_area_m2, RzPoint};
+use crate::geometry::{checked_polygon, signed_area_m2, GeometryError, RzPoint};
 use serde::{Deserialize, Serialize};
+
+/// Most points of a region polygon (it is triangulated by ear clipping).
+pub const MAX_REGION_POINTS: usize = 1000;
 
 /// Axis-aligned bounds of a region, m; a missing bound is unbounded on that side.
 #[derive(Debug, Clone, Copy, PartialEq, Default, Serialize, Deserialize)]
@@ -119,6 +122,9 @@ impl Region {
 
     fn polygon_cells(&self, points: &[RzPoint]) -> Result<Vec<Vec<HalfPlane>>, LayupError> {
         let wrap = |source| LayupError::BadRegionPolygon { region: self.name.clone(), source };
+        if points.len() > MAX_REGION_POINTS {
+            return Err(wrap(GeometryError::TooManyPoints { count: points.len(), max: MAX_REGION_POINTS }));
+        }
         let mut polygon = checked_polygon(points).map_err(wrap)?;
         if signed_area_m2(&polygon) < 0.0 {
             polygon.reverse();

@@ -50,6 +50,20 @@ impl TriangleMesh {
         Ok(mesh)
     }
 
+    /// One mesh per material (regions of the same material name merged), in order of first
+    /// appearance: what a two-material print or mould needs.
+    pub fn by_material(regions: &[FilledRegion], segments: usize) -> Result<Vec<(String, TriangleMesh)>, MeshError> {
+        let mut meshes: Vec<(String, TriangleMesh)> = Vec::new();
+        for region in regions {
+            let mesh = Self::of_region(region, segments)?;
+            match meshes.iter_mut().find(|(name, _)| *name == region.material.name) {
+                Some((_, existing)) => existing.append(&mesh),
+                None => meshes.push((region.material.name.clone(), mesh)),
+            }
+        }
+        Ok(meshes)
+    }
+
     /// Adds another mesh's vertices and triangles to this one.
     pub fn append(&mut self, other: &TriangleMesh) {
         let offset = self.vertices.len() as u32;

@@ -150,3 +150,16 @@ fn bad_mesh_segments_are_rejected() {
         assert!(matches!(err, MeshError::SegmentsOutOfRange { .. }), "{err:?}");
     }
 }
+
+#[test]
+fn oversized_region_polygon_is_rejected() {
+    let many: Vec<RzPoint> = (0..=MAX_REGION_POINTS)
+        .map(|k| {
+            let t = std::f64::consts::TAU * k as f64 / (MAX_REGION_POINTS + 1) as f64;
+            RzPoint::new(0.05 + 0.01 * t.cos(), 0.005 + 0.004 * t.sin())
+        })
+        .collect();
+    let layup = Layup::embedded_insert(material("a", 900.0), material("b", 1300.0), many);
+    let err = mass_breakdown(&rectangle(0.0, 0.1, 0.0, 0.01), &layup).expect_err("too many points");
+    assert!(matches!(err, MassError::Layup(LayupError::BadRegionPolygon { source: GeometryError::TooManyPoints { .. }, .. })), "{err:?}");
+}

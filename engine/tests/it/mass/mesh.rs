@@ -82,3 +82,16 @@ fn rest_region_around_an_insert_meshes_as_a_solid_with_a_cavity() {
     let whole = TriangleMesh::of_outline(&outline, 64).expect("mesh").signed_volume_m3();
     assert_rel(meshes[0].signed_volume_m3() + meshes[1].signed_volume_m3(), whole, 1e-12, "insert + rest");
 }
+
+#[test]
+fn insert_ring_meshes_by_material_merge_the_two_base_regions() {
+    let outline = family_outline(DiscFamily::Driver);
+    let layup = Layup::insert_ring(material("base blend", 950.0), material("insert", 2700.0), 0.09, 0.095);
+    let regions = fill_outline(&outline, &layup).expect("fits");
+    let meshes = TriangleMesh::by_material(&regions, 90).expect("meshes");
+    let names: Vec<&str> = meshes.iter().map(|(name, _)| name.as_str()).collect();
+    assert_eq!(names, ["base blend", "insert"]);
+    let total: f64 = meshes.iter().map(|(_, m)| m.signed_volume_m3()).sum();
+    let whole = TriangleMesh::of_outline(&outline, 90).expect("mesh").signed_volume_m3();
+    assert_rel(total, whole, 1e-12, "material volumes");
+}
