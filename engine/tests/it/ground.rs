@@ -470,3 +470,22 @@ fn sliding_and_spinning_stop_together() {
         assert!(result.samples.iter().rev().nth(1).is_some_and(|s| s.spin_rad_s.abs() < 0.1 * spin.abs()));
     }
 }
+
+#[test]
+fn ground_play_converges_as_the_time_step_shrinks() {
+    // source: common practice, no published source (numerical convergence check).
+    let fine = GroundSettings { step_s: 2.5e-4, ..GroundSettings::default() };
+    let landings = [
+        (SurfacePreset::ShortGrass, landing(Vector3::new(10.0, 0.0, -2.5), tilted_axis(0.8, 1.2), -90.0)),
+        (SurfacePreset::PackedDirt, landing(Vector3::new(12.0, 3.0, -3.0), tilted_axis(0.3, 2.0), -70.0)),
+        (SurfacePreset::HardCourt, nose_down_landing(-80.0)),
+        (SurfacePreset::Sand, landing(Vector3::new(8.0, -1.0, -4.0), tilted_axis(0.5, -0.5), 60.0)),
+    ];
+    for (preset, start) in landings {
+        let ground = Ground::level(preset);
+        let coarse = play(&ground, &start);
+        let refined = play_out_landing(&disc(), &ground, &start, &fine).expect("plays out");
+        assert_eq!(coarse.describe(), refined.describe());
+        assert!(rel_diff(coarse.ground_play_m, refined.ground_play_m) < 1e-4, "{preset:?}: {} m vs {} m", coarse.ground_play_m, refined.ground_play_m);
+    }
+}
