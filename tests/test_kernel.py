@@ -158,6 +158,28 @@ def test_an_interrupt_stops_a_long_cell_within_one_second(kernel):
     assert client.execute_interactive("1 + 1", timeout=10)["content"]["status"] == "ok"
 
 
+def test_executes_queued_behind_a_failing_cell_are_aborted(kernel):
+    manager, client = kernel
+    failing = client.execute('let n = 0; while n < 200000 { n += 1; } throw "stop here";')
+    queued = [client.execute("1 + 1"), client.execute("2 + 2")]
+    statuses = replies_by_id(client, [failing, *queued])
+    assert [statuses[m] for m in (failing, *queued)] == ["error", "aborted", "aborted"]
+    assert client.execute_interactive("3 + 3", timeout=10)["content"]["status"] == "ok"
+    quiet = client.execute("throw 1;", stop_on_error=False)
+    after = client.execute("4 + 4")
+    statuses = replies_by_id(client, [quiet, after])
+    assert [statuses[quiet], statuses[after]] == ["error", "ok"]
+
+
+def replies_by_id(client, msg_ids):
+    """The status of the shell reply to each of `msg_ids`, in whatever order they arrive."""
+    statuses = {}
+    while len(statuses) < len(msg_ids):
+        reply = client.get_shell_msg(timeout=15)
+        statuses[reply["parent_header"].get("msg_id")] = reply["content"]["status"]
+    return statuses
+
+
 def test_a_restart_gives_a_fresh_kernel(kernel):
     manager, client = kernel
     client.execute_interactive("let kept = 5;", timeout=10)

@@ -56,3 +56,38 @@ impl OutputSink for CellSink {
         self.publish("update_display_data", content);
     }
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use tokio::sync::mpsc::unbounded_channel;
+
+    fn request() -> WireMessage {
+        WireMessage::orphan("execute_request", "s1", json!({"code": "1"}))
+    }
+
+    #[test]
+    fn displays_and_their_updates_carry_the_display_id() {
+        let (queue, mut queued) = unbounded_channel();
+        let sink = CellSink::new(Iopub::new(queue), &request(), false);
+        sink.stdout("hello\n");
+        sink.display(&MimeBundle::plain("0/10 throws"), Some("progress-1"));
+        sink.update_display(&MimeBundle::plain("10/10 throws"), "progress-1");
+        let messages: Vec<WireMessage> = std::iter::from_fn(|| queued.try_recv().ok()).collect();
+        let types: Vec<&str> = messages.iter().map(|m| m.header.msg_type.as_str()).collect();
+        assert_eq!(types, ["stream", "display_data", "update_display_data"]);
+        assert_eq!(messages[0].content, json!({"name": "stdout", "text": "hello\n"}));
+        assert_eq!(messages[2].content["transient"]["display_id"], "progress-1");
+        assert_eq!(messages[2].content["data"]["text/plain"], "10/10 throws");
+        assert_eq!(messages[2].parent_header["msg_type"], "execute_request");
+    }
+
+    #[test]
+    fn a_silent_cell_publishes_nothing() {
+        let (queue, mut queued) = unbounded_channel();
+        let sink = CellSink::new(Iopub::new(queue), &request(), true);
+        sink.stdout("hidden");
+        sink.display(&MimeBundle::plain("x"), None);
+        assert!(queued.try_recv().is_err());
+    }
+}

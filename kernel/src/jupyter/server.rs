@@ -10,6 +10,9 @@ use spinfoil_lang::SessionSettings;
 use std::time::Duration;
 use zeromq::{RouterSocket, ZmqResult};
 
+/// How long the shell waits for more queued requests when aborting after an error, ms.
+const QUEUE_DRAIN_MS: u64 = 2;
+
 /// Serves Jupyter clients on the ports of `info` until a `shutdown_request` arrives.
 pub async fn serve(info: ConnectionInfo) -> ZmqResult<()> {
     let signer = Signer::new(&info.key);
@@ -32,10 +35,34 @@ pub async fn serve(info: ConnectionInfo) -> ZmqResult<()> {
 
 async fn shell_loop(mut socket: RouterSocket, mut handlers: ShellHandlers, iopub: Iopub, signer: Signer) {
     while let Ok(request) = receive(&mut socket, &signer).await {
-        iopub.status(&request, "busy");
-        if let Some(reply) = handlers.handle(&request).await {
-            send(&mut socket, &reply, &signer).await;
+        serve_one(&mut socket, &mut handlers, &iopub, &signer, &request).await;
+    }
+}
+
+async fn serve_one(socket: &mut RouterSocket, handlers: &mut ShellHandlers, iopub: &Iopub, signer: &Signer, request: &WireMessage) {
+    iopub.status(request, "busy");
+    let reply = handlers.handle(request).await;
+    if handlers.take_abort() {
+        Box::pin(abort_queued(socket, handlers, iopub, signer)).await;
+    }
+    if let Some(reply) = reply {
+        send(socket, &reply, signer).await;
+    }
+    iopub.status(request, "idle");
+}
+
+/// After a failed cell with `stop_on_error`, the executes already waiting (sent before the
+/// failed cell's reply) are answered `aborted`, as Jupyter expects when "run all" meets an
+/// error; other waiting requests are served.
+async fn abort_queued(socket: &mut RouterSocket, handlers: &mut ShellHandlers, iopub: &Iopub, signer: &Signer) {
+    let waiting = Duration::from_millis(QUEUE_DRAIN_MS);
+    while let Ok(Ok(request)) = tokio::time::timeout(waiting, receive(socket, signer)).await {
+        if request.header.msg_type != "execute_request" {
+            serve_one(socket, handlers, iopub, signer, &request).await;
+            continue;
         }
+        iopub.status(&request, "busy");
+        send(socket, &handlers.aborted(&request), signer).await;
         iopub.status(&request, "idle");
     }
 }

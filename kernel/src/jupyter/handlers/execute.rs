@@ -29,6 +29,7 @@ impl ShellHandlers {
             let output = outcome.as_ref().ok().and_then(|r| r.as_ref()).and_then(|b| b.text_plain()).map(str::to_string);
             self.history.record(count, &cell.code, output);
         }
+        self.abort_queued = outcome.is_err() && cell.stop_on_error && !cell.silent;
         let expressions = self.user_expressions(cell.user_expressions.clone()).await;
         self.reply_to_cell(request, &cell, count, outcome, expressions)
     }

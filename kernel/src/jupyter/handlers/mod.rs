@@ -20,12 +20,13 @@ pub struct ShellHandlers {
     iopub: Iopub,
     history: History,
     execution_count: usize,
+    abort_queued: bool,
 }
 
 impl ShellHandlers {
     /// Handlers running cells on `worker` and publishing on `iopub`.
     pub fn new(worker: Worker, iopub: Iopub) -> Self {
-        Self { worker, iopub, history: History::default(), execution_count: 0 }
+        Self { worker, iopub, history: History::default(), execution_count: 0, abort_queued: false }
     }
 
     /// The reply to `request`, or None for message types this kernel does not answer.
@@ -44,6 +45,18 @@ impl ShellHandlers {
             }
         };
         Some(reply)
+    }
+
+    /// True once after a cell failed with `stop_on_error`: queued executes should be aborted.
+    pub fn take_abort(&mut self) -> bool {
+        std::mem::take(&mut self.abort_queued)
+    }
+
+    /// The reply to an execute request skipped because an earlier cell failed.
+    pub fn aborted(&self, request: &WireMessage) -> WireMessage {
+        request.reply("execute_reply", json!({
+            "status": "aborted", "execution_count": self.execution_count, "user_expressions": {}, "payload": [],
+        }))
     }
 
     fn history(&self, request: &WireMessage) -> WireMessage {
