@@ -15,6 +15,9 @@ use super::{FlightConditions, FlightError, FlightSettings};
 pub(crate) struct Trajectory {
     dense: ContinuousOutputModel<f64, StateVector>,
     initial: DiscState,
+    /// The solver's last state, for times at the very end that rounding puts past the dense
+    /// output's last breakpoint.
+    last: DiscState,
     /// Times of the accepted steps' ends (s), ascending, all < `end_time_s` after landing.
     pub step_times_s: Vec<f64>,
     /// The solver's states at `step_times_s` (not projected).
@@ -36,7 +39,7 @@ impl Trajectory {
         let t = t.min(self.end_time_s);
         match self.dense.evaluate(t) {
             Some(y) => DiscState::from_vector(&y).projected(),
-            None => self.initial,
+            None => self.last,
         }
     }
 }
@@ -59,9 +62,11 @@ pub(crate) fn integrate(
         return Err(FlightError::NonFinite { time_s, quantity });
     }
     let stats = outcome.map_err(|e| solver_error(e, settings))?;
+    let last = solver.y_out().last().map_or(initial, |y| DiscState::from_vector(y).projected());
     let trajectory = Trajectory {
         dense,
         initial,
+        last,
         step_times_s: solver.x_out().clone(),
         step_states: solver.y_out().clone(),
         end_time_s: settings.max_time_s,

@@ -20,8 +20,15 @@ fn torque_free_disc_keeps_its_angular_momentum() {
     // (torque-free body: H and the kinetic energy are constant)
     let body = hummel_body();
     let flight = wobbling_flight(&body);
+    // the flight really ran its full second: uniform straight motion of the centre of mass
+    // (Newton's first law) to the end state
+    let (r0, v0) = (flight.release_state.position_m, flight.release_state.velocity_mps);
+    assert_eq!(flight.metrics.time_aloft_s, 1.0);
+    assert!((flight.landing_state.position_m - (r0 + v0 * 1.0)).norm() < 1e-9);
+    assert!(!flight.landed);
     let h0 = flight.release_state.angular_momentum(&body);
     let h1 = flight.landing_state.angular_momentum(&body);
+    assert!((flight.landing_state.normal - flight.release_state.normal).norm() > 0.01, "the axis has moved");
     assert!((h1 - h0).norm() / h0.norm() < 1e-8, "{}", (h1 - h0).norm() / h0.norm());
     assert!(rel_diff(flight.landing_state.kinetic_energy_j(&body), flight.release_state.kinetic_energy_j(&body)) < 1e-8);
     // the wobble angle (n against the line of H) stays constant
