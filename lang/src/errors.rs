@@ -59,10 +59,14 @@ pub(crate) fn edit_distance(a: &str, b: &str) -> usize {
 /// name's stem before its unit suffix, e.g. `diameter_mm` → `diameter_cm`).
 pub(crate) fn closest<'a>(name: &str, candidates: impl IntoIterator<Item = &'a str>) -> Option<&'a str> {
     let stem = |s: &str| s.rsplit_once('_').map_or(s.to_string(), |(head, _)| head.to_string());
+    let related = |c: &str| {
+        let (a, b) = (stem(name), stem(c));
+        name.contains('_') && (a == b || (a.len() >= 3 && b.starts_with(&a)) || (b.len() >= 3 && a.starts_with(&b)))
+    };
     candidates
         .into_iter()
         .map(|c| (edit_distance(name, c), c))
-        .filter(|(d, c)| *d <= 2.max(name.len() / 3) || (stem(c) == stem(name) && name.contains('_')))
+        .filter(|(d, c)| *d <= 2.max(name.len() / 3) || related(c))
         .min_by_key(|(d, _)| *d)
         .map(|(_, c)| c)
 }
@@ -83,6 +87,7 @@ mod tests {
         assert_eq!(closest("diameter_mm", ["diameter_cm", "rim_width_cm"]), Some("diameter_cm"));
         assert_eq!(closest("sped_mps", ["speed_mps", "spin_rpm"]), Some("speed_mps"));
         assert_eq!(closest("xyzzy", ["speed_mps", "spin_rpm"]), None);
+        assert_eq!(closest("temp_c", ["altitude_m", "temperature_c", "humidity_pct"]), Some("temperature_c"));
     }
 
     #[test]

@@ -76,7 +76,7 @@ impl OptionSpec {
                 let quoted: Vec<String> = words.iter().map(|w| format!("\"{w}\"")).collect();
                 format!("one of {}", quoted.join(", "))
             }
-            OptionKind::Text => "a text".to_string(),
+            OptionKind::Text => "a string".to_string(),
             OptionKind::Flag => "true or false".to_string(),
         }
     }

@@ -97,7 +97,7 @@ impl OptionValues {
 
     fn insert_choice(&mut self, spec: &OptionSpec, value: &Dynamic, words: &[&str]) -> Checked<()> {
         let Some(text) = value.read_lock::<rhai::ImmutableString>().map(|s| s.to_string()) else {
-            return self.fail(spec, &describe(value), "is not a text");
+            return self.fail(spec, &describe(value), "is not a string");
         };
         if !words.contains(&text.as_str()) {
             return self.fail(spec, &format!("\"{text}\""), "is not allowed");
@@ -112,7 +112,7 @@ impl OptionValues {
                 self.texts.insert(spec.key.to_string(), text.to_string());
                 Ok(())
             }
-            None => self.fail(spec, &describe(value), "is not a text"),
+            None => self.fail(spec, &describe(value), "is not a string"),
         }
     }
 
@@ -160,7 +160,7 @@ impl OptionValues {
 
 fn describe(value: &Dynamic) -> String {
     if value.is_string() {
-        format!("\"{value}\" (a text)")
+        format!("\"{value}\" (a string)")
     } else {
         format!("{value} (a {})", crate::errors::friendly_type(value))
     }

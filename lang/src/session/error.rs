@@ -1,5 +1,6 @@
 use crate::errors::{closest, split_kind};
 use super::SessionSettings;
+use crate::help::Docs;
 use rhai::{EvalAltResult, ParseError, Position};
 
 /// An error from a cell, with its script position when there is one.
@@ -37,7 +38,7 @@ impl CellError {
 
     /// A runtime error, reported at its position in the cell being run: for errors inside
     /// function calls, the call site (the outermost position); the message names the functions.
-    pub(crate) fn from_eval(err: &EvalAltResult, settings: &SessionSettings, known_fns: &[&str]) -> Self {
+    pub(crate) fn from_eval(err: &EvalAltResult, settings: &SessionSettings, docs: &Docs) -> Self {
         let mut calls = Vec::new();
         let mut inner = err;
         while let EvalAltResult::ErrorInFunctionCall(name, _, cause, _) = inner {
@@ -47,7 +48,7 @@ impl CellError {
             inner = cause;
         }
         let pos = if err.position().is_none() { inner.position() } else { err.position() };
-        let (kind, mut message) = classify(inner, settings, known_fns);
+        let (kind, mut message) = classify(inner, settings, docs);
         for name in calls {
             message.push_str(&format!("\n  in call to function '{name}'"));
         }
@@ -64,7 +65,7 @@ fn plain_message(err: &EvalAltResult) -> String {
     }
 }
 
-fn classify(err: &EvalAltResult, settings: &SessionSettings, known_fns: &[&str]) -> (String, String) {
+fn classify(err: &EvalAltResult, settings: &SessionSettings, docs: &Docs) -> (String, String) {
     use EvalAltResult as E;
     if let Some(message) = settings.limit_message(err) {
         return ("LimitError".into(), message);
@@ -72,7 +73,8 @@ fn classify(err: &EvalAltResult, settings: &SessionSettings, known_fns: &[&str])
     let kind = match err {
         E::ErrorRuntime(value, _) => return runtime_value(&value.to_string()),
         E::ErrorTerminated(..) => return ("Interrupted".into(), "the cell was interrupted".into()),
-        E::ErrorFunctionNotFound(signature, _) => return ("NameError".into(), unknown_function(signature, known_fns)),
+        E::ErrorFunctionNotFound(signature, _) => return ("NameError".into(), unknown_function(signature, &docs.names())),
+        E::ErrorDotExpr(text, _) if text.starts_with("Unknown property") => return ("NameError".into(), unknown_field(text, docs)),
         E::ErrorParsing(..) => "SyntaxError",
         E::ErrorVariableNotFound(..) | E::ErrorPropertyNotFound(..) | E::ErrorModuleNotFound(..) => "NameError",
         E::ErrorMismatchDataType(..) | E::ErrorMismatchOutputType(..) | E::ErrorIndexingType(..) | E::ErrorFor(..) => "TypeError",
@@ -99,4 +101,17 @@ fn unknown_function(signature: &str, known_fns: &[&str]) -> String {
         message.push_str(&format!("; did you mean '{near}'?"));
     }
     message
+}
+
+/// "Unknown property 'x' - a getter is not registered for type 'T'" restated with the type's
+/// fields and the nearest one.
+fn unknown_field(text: &str, docs: &Docs) -> String {
+    let quoted: Vec<&str> = text.split('\'').collect();
+    let (Some(field), Some(type_name)) = (quoted.get(1), quoted.get(3)) else { return text.to_string() };
+    let fields: Vec<&str> = docs.fields_of(type_name).iter().map(|f| f.field.as_str()).collect();
+    if fields.is_empty() {
+        return format!("{type_name} has no field '{field}'");
+    }
+    let hint = closest(field, fields.iter().copied()).map_or(String::new(), |near| format!("; did you mean '{near}'?"));
+    format!("{type_name} has no field '{field}'{hint} (fields: {})", fields.join(", "))
 }

@@ -61,7 +61,7 @@ impl Session {
         let value: Dynamic = self
             .engine
             .eval_ast_with_scope(&mut self.scope, &merged)
-            .map_err(|e| CellError::from_eval(&e, &self.settings, &self.docs.names()))?;
+            .map_err(|e| CellError::from_eval(&e, &self.settings, &self.docs))?;
         Ok((!value.is_unit()).then(|| crate::render::render_value(&value)))
     }
 
