@@ -4,6 +4,7 @@ use anyhow::Context;
 use spinfoil_kernel::kernelspec::{install, InstallTarget};
 use spinfoil_kernel::notebook::{html_report, run_notebook, Notebook, RunSettings};
 use spinfoil_kernel::script::{run_prompt, run_script, ProgressBoardSink, ScriptSettings, TableExport};
+use std::path::PathBuf;
 use std::sync::Arc;
 
 /// How a command ended, when it did not fail to run.
@@ -51,19 +52,27 @@ fn run(args: RunArgs) -> anyhow::Result<Outcome> {
 
 fn report(args: ReportArgs) -> anyhow::Result<Outcome> {
     let mut notebook = Notebook::load(&args.notebook)?;
-    let settings = RunSettings { keep_going: args.keep_going, observer: Some(Arc::new(ProgressBoardSink::default())), ..RunSettings::default() };
+    let observer = Arc::new(ProgressBoardSink::default());
+    let settings = RunSettings { keep_going: args.keep_going, observer: Some(observer), ..RunSettings::default() };
     let summary = run_notebook(&mut notebook, &settings);
-    let stem = args.notebook.file_stem().map_or_else(|| "notebook".into(), |s| s.to_string_lossy().to_string());
-    std::fs::create_dir_all(&args.out).with_context(|| format!("cannot create {}", args.out.display()))?;
-    let executed = args.out.join(format!("{stem}.ipynb"));
-    notebook.save(&executed)?;
-    let html = args.out.join(format!("{stem}.html"));
-    std::fs::write(&html, html_report(&notebook, &args.notebook.file_name().map_or_else(|| stem.clone(), |n| n.to_string_lossy().to_string()))).with_context(|| format!("cannot write {}", html.display()))?;
+    let (executed, html) = write_report(&notebook, &args)?;
     println!("{} code cells run; wrote {} and {}", summary.cells_run, executed.display(), html.display());
     for (cell, error) in &summary.errors {
         eprintln!("cell {} failed:\n{}", cell + 1, error.text());
     }
     Ok(if summary.errors.is_empty() { Outcome::Done } else { Outcome::StudyFailed })
+}
+
+/// Writes OUT/NAME.ipynb and OUT/NAME.html; returns their paths.
+fn write_report(notebook: &Notebook, args: &ReportArgs) -> anyhow::Result<(PathBuf, PathBuf)> {
+    let name = |part: Option<&std::ffi::OsStr>| part.map_or_else(|| "notebook".to_string(), |s| s.to_string_lossy().into_owned());
+    let (stem, file_name) = (name(args.notebook.file_stem()), name(args.notebook.file_name()));
+    std::fs::create_dir_all(&args.out).with_context(|| format!("cannot create {}", args.out.display()))?;
+    let executed = args.out.join(format!("{stem}.ipynb"));
+    notebook.save(&executed)?;
+    let html = args.out.join(format!("{stem}.html"));
+    std::fs::write(&html, html_report(notebook, &file_name)).with_context(|| format!("cannot write {}", html.display()))?;
+    Ok((executed, html))
 }
 
 fn install_kernel(args: InstallArgs) -> anyhow::Result<Outcome> {

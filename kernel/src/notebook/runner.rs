@@ -11,7 +11,7 @@ use spinfoil_lang::{CollectedOutput, OutputSink, Session, SessionSettings};
 use std::sync::Arc;
 
 /// How to run a notebook.
-#[derive(Clone)]
+#[derive(Clone, Default)]
 pub struct RunSettings {
     /// Keep running the cells after one fails (default false: stop, as nbclient does).
     pub keep_going: bool,
@@ -19,12 +19,6 @@ pub struct RunSettings {
     pub session: SessionSettings,
     /// Also sends every event here as it happens, e.g. progress bars (default none).
     pub observer: Option<Arc<dyn OutputSink>>,
-}
-
-impl Default for RunSettings {
-    fn default() -> Self {
-        Self { keep_going: false, session: SessionSettings::default(), observer: None }
-    }
 }
 
 /// What a run did.
