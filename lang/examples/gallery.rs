@@ -34,6 +34,8 @@ fn gallery() -> Vec<(&'static str, MimeBundle)> {
         ("scatter", scatter().render()),
         ("empty_chart", PlanView::new("A plan view with nothing to show").render()),
         ("table", table().render()),
+        ("stress_bars", stress_bars().render()),
+        ("stress_plan", stress_plan().render()),
     ]
 }
 
@@ -164,4 +166,23 @@ fn scatter() -> ScatterEllipses {
     ScatterEllipses::new("Landing points under throw scatter", Axis::new("downrange x", "m"), Axis::new("lateral y", "m"))
         .cloud(one)
         .cloud(two)
+}
+
+/// Many designs with long names and a long title: labels must not collide.
+fn stress_bars() -> MassBars {
+    let quantities = vec!["I_z".to_string(), "I_x".to_string(), "I_x at the rim only".to_string()];
+    let title = "Moments of inertia of eight prototypes from the invented workshop's autumn series of test moulds";
+    (0..8).fold(MassBars::new(title, Axis::new("moment of inertia", "g·cm²"), quantities), |chart, i| {
+        let base = 9000.0 + 650.0 * i as f64;
+        chart.group(format!("Prototype {} long name", i + 1), vec![base * 1.52, base * 0.77, base * 0.31])
+    })
+}
+
+/// Nine flights, more than the palette has colours, fanning left and right.
+fn stress_plan() -> PlanView {
+    (0..9).fold(PlanView::new("Nine release angles"), |chart, i| {
+        let fade = -20.0 + 5.0 * i as f64;
+        let points: Vec<(f64, f64)> = demo_flight(80.0 + 2.0 * i as f64, 3.0, fade).iter().map(|p| (p.1, p.2)).collect();
+        chart.track(Track::new(format!("hyzer {} deg", -8 + 2 * i), points))
+    })
 }

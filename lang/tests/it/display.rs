@@ -342,6 +342,51 @@ mod charts {
     }
 
     #[test]
+    fn crowded_bars_turn_their_labels_upright_and_shorten_long_names() {
+        let quantities = vec!["I_z".to_string(), "I_x".to_string(), "I_rim".to_string()];
+        let chart = (0..8).fold(MassBars::new("Many", Axis::new("moment of inertia", "g·cm²"), quantities), |c, i| {
+            c.group(format!("Prototype {i} with a very long workshop name"), vec![13000.0 + 100.0 * i as f64, 6500.0, 2800.0])
+        });
+        let upright = |text: &str| svg::parse(text).descendants().filter(|n| n.has_tag_name("text"))
+            .filter(|n| n.attribute("transform").is_some_and(|t| t.starts_with("rotate(270"))).count();
+        let text = svg::of(&chart.render());
+        let doc = svg::parse(&text);
+        assert_eq!(upright(&text), 24 + 1, "every bar label upright, and the y-axis title");
+        assert!(svg::has_text(&doc, "13100  +0.8 %"), "value and change in one upright label");
+        assert!(svg::texts(&doc).iter().any(|t| t.ends_with('…')), "long names cut");
+        // Few bars keep their labels across.
+        let few = MassBars::new("Few", Axis::new("I", "g·cm²"), vec!["I_z".into()]).group("a", vec![1.0]).group("b", vec![2.0]);
+        assert_eq!(upright(&svg::of(&few.render())), 1, "only the y-axis title upright when labels fit");
+    }
+
+    #[test]
+    fn long_titles_wrap_instead_of_running_off_the_chart() {
+        let title = "A very long title that describes a study of eight prototypes from an invented workshop in detail";
+        let text = svg::of(&LineChart::new(title, Axis::new("x", "m"), Axis::new("y", "m")).series(Series::new("s", vec![(0.0, 0.0), (1.0, 1.0)])).render());
+        let doc = svg::parse(&text);
+        let title_lines: Vec<String> = doc.descendants().filter(|n| n.has_tag_name("text") && n.attribute("font-weight") == Some("bold"))
+            .map(|n| n.text().unwrap_or("").trim().to_string()).collect();
+        assert!(title_lines.len() >= 2, "{title_lines:?}");
+        assert_eq!(title_lines.join(" "), title, "nothing lost");
+        assert!(title_lines.iter().all(|l| l.chars().count() * 10 < 760), "each line fits: {title_lines:?}");
+    }
+
+    #[test]
+    fn series_past_the_palette_are_dashed_not_confused() {
+        let chart = (0..9).fold(LineChart::new("Nine", Axis::new("x", "m"), Axis::new("y", "m")), |c, i| {
+            c.series(Series::new(format!("s{i}"), (0..40).map(|k| (k as f64, (k * i) as f64)).collect()))
+        });
+        let text = svg::of(&chart.render());
+        let doc = svg::parse(&text);
+        assert_eq!(svg::long_polylines(&doc, 30), 7, "the first seven solid");
+        let dashes = svg::polyline_lengths(&doc).into_iter().filter(|n| *n == 2).count();
+        assert!(dashes > 20, "the eighth and ninth dashed: {dashes} dash segments");
+        for i in 0..9 {
+            assert!(svg::has_text(&doc, &format!("s{i}")), "legend entry s{i}");
+        }
+    }
+
+    #[test]
     fn every_chart_uses_our_palette_and_fonts() {
         let text = svg::of(&plan(&[("a", 20, 50.0), ("b", 20, 60.0)]).render());
         assert!(text.contains("#0072B2") && text.contains("#D55E00"), "Okabe–Ito colours for the first two series");

@@ -1,7 +1,7 @@
 //! Text styles in our fonts, sized in real pixels.
 
 use crate::display::style::{FONT_FAMILY, INK};
-use plotters::style::{FontStyle, IntoFont, RGBColor, TextStyle};
+use plotters::style::{FontStyle, FontTransform, IntoFont, RGBColor, TextStyle};
 use plotters::style::text_anchor::{HPos, Pos, VPos};
 
 /// The SVG backend writes `size / 1.24` as the font size; this undoes that.
@@ -22,4 +22,9 @@ pub(crate) fn bold(size_px: f64) -> TextStyle<'static> {
 /// The same style anchored at (`h`, `v`).
 pub(crate) fn anchored(style: TextStyle<'static>, h: HPos, v: VPos) -> TextStyle<'static> {
     style.pos(Pos::new(h, v))
+}
+
+/// The same style turned to read upwards (rotated a quarter turn anticlockwise).
+pub(crate) fn upright(style: TextStyle<'static>) -> TextStyle<'static> {
+    TextStyle { font: style.font.transform(FontTransform::Rotate270), ..style }
 }

@@ -17,6 +17,7 @@ pub(crate) type Area<'a> = DrawingArea<SVGBackend<'a>, Shift>;
 pub(crate) type Drawn = Result<(), Box<dyn std::error::Error>>;
 
 const TITLE_ROW_PX: i32 = 34;
+const TITLE_LINE_PX: i32 = 22;
 const SUBTITLE_ROW_PX: i32 = 20;
 const LINE_PX: i32 = 16;
 const NO_DATA_BODY_PX: u32 = 180;
@@ -59,15 +60,29 @@ impl Frame {
     }
 
     fn footer_text(mut self, text: &str, colour: RGBColor) -> Self {
-        let chars_per_line = ((CHART_WIDTH_PX as f64 - 32.0) / (SMALL_PX * 0.58)) as usize;
-        self.footer.extend(wrap(text, chars_per_line).into_iter().map(|line| (line, colour)));
+        self.footer.extend(wrap(text, chars_per_line(SMALL_PX)).into_iter().map(|line| (line, colour)));
         self
     }
 
+    /// The title in lines that fit the chart width.
+    fn title_lines(&self) -> Vec<String> {
+        wrap(&self.title, chars_per_line(TITLE_PX * 1.08))
+    }
+
+    /// The subtitle in lines that fit the chart width (none without a subtitle).
+    fn subtitle_lines(&self) -> Vec<String> {
+        self.subtitle.as_deref().map_or(Vec::new(), |s| wrap(s, chars_per_line(TEXT_PX)))
+    }
+
+    /// Pixels from the top to the first subtitle line.
+    fn title_px(&self) -> i32 {
+        TITLE_ROW_PX + TITLE_LINE_PX * (self.title_lines().len().max(1) as i32 - 1)
+    }
+
     fn header_px(&self) -> i32 {
-        let subtitle = if self.subtitle.is_some() { SUBTITLE_ROW_PX } else { 0 };
+        let subtitle = SUBTITLE_ROW_PX * self.subtitle_lines().len() as i32;
         let legend = if self.legend.len() > 1 { legend::height(&self.legend) + 4 } else { 0 };
-        TITLE_ROW_PX + subtitle + legend
+        self.title_px() + subtitle + legend
     }
 
     fn footer_px(&self) -> i32 {
@@ -118,13 +133,17 @@ impl Frame {
     }
 
     fn draw_header(&self, root: &Area) -> Drawn {
-        root.draw(&Rectangle::new([(LEFT_PX - 8, 11), (LEFT_PX - 4, 29)], series_colour(0).filled()))?;
-        root.draw(&Text::new(self.title.clone(), (LEFT_PX, 12), font::bold(TITLE_PX)))?;
-        if let Some(subtitle) = &self.subtitle {
-            root.draw(&Text::new(subtitle.clone(), (LEFT_PX, TITLE_ROW_PX + 1), font::text(TEXT_PX, MUTED_INK)))?;
+        root.draw(&Rectangle::new([(LEFT_PX - 8, 11), (LEFT_PX - 4, self.title_px() - 5)], series_colour(0).filled()))?;
+        for (index, line) in self.title_lines().into_iter().enumerate() {
+            root.draw(&Text::new(line, (LEFT_PX, 12 + TITLE_LINE_PX * index as i32), font::bold(TITLE_PX)))?;
+        }
+        let subtitle_top = self.title_px() + 1;
+        for (index, line) in self.subtitle_lines().into_iter().enumerate() {
+            let y = subtitle_top + SUBTITLE_ROW_PX * index as i32;
+            root.draw(&Text::new(line, (LEFT_PX, y), font::text(TEXT_PX, MUTED_INK)))?;
         }
         if self.legend.len() > 1 {
-            let top = TITLE_ROW_PX + if self.subtitle.is_some() { SUBTITLE_ROW_PX } else { 0 };
+            let top = self.title_px() + SUBTITLE_ROW_PX * self.subtitle_lines().len() as i32;
             legend::draw(root, &self.legend, top)?;
         }
         Ok(())
@@ -137,6 +156,11 @@ impl Frame {
         }
         Ok(())
     }
+}
+
+/// How many characters of `size_px` text fit across the chart.
+fn chars_per_line(size_px: f64) -> usize {
+    ((CHART_WIDTH_PX as f64 - 2.0 * LEFT_PX as f64) / text_width_px("x", size_px)) as usize
 }
 
 /// Words of `text` in lines of at most `width` characters.

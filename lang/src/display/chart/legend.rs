@@ -2,7 +2,7 @@
 
 use super::font;
 use super::frame::{Area, Drawn};
-use crate::display::style::{text_width_px, CHART_WIDTH_PX, INK, TEXT_PX};
+use crate::display::style::{series_colour, text_width_px, CHART_WIDTH_PX, INK, SERIES_COLOURS, TEXT_PX};
 use plotters::element::{Circle, PathElement, Polygon, Rectangle, Text};
 use plotters::style::text_anchor::{HPos, VPos};
 use plotters::style::{Color, RGBColor};
@@ -47,6 +47,17 @@ impl LegendEntry {
     pub fn new(swatch: Swatch, label: impl Into<String>) -> Self {
         Self { swatch, label: label.into() }
     }
+}
+
+/// The swatch of series number `index`: solid in the first round of the palette, dashed after.
+pub(crate) fn series_swatch(index: usize) -> Swatch {
+    let colour = series_colour(index);
+    if is_dashed(index) { Swatch::Dashed(colour) } else { Swatch::Line(colour) }
+}
+
+/// Series past the palette's length repeat its colours as dashed lines.
+pub(crate) fn is_dashed(index: usize) -> bool {
+    index >= SERIES_COLOURS.len()
 }
 
 /// The left-top position of every entry, relative to the legend's origin.

@@ -5,11 +5,12 @@ use super::axes::{self, Plot};
 use super::bounds::Bounds;
 use super::data::{Axis, Series};
 use super::frame::{Drawn, Frame};
-use super::legend::{LegendEntry, Swatch};
+use super::legend::{is_dashed, series_swatch, LegendEntry};
 use crate::display::style::series_colour;
 use crate::display::Render;
 use crate::MimeBundle;
 use plotters::element::{Circle, PathElement};
+use plotters::series::DashedLineSeries;
 use plotters::style::{Color, RGBColor};
 
 const PLOT_HEIGHT_PX: f64 = 330.0;
@@ -64,7 +65,7 @@ impl LineChart {
             if self.zero_line {
                 draw_zero_line(&mut plot, bounds)?;
             }
-            draw_series(&mut plot, &self.series, series_colour)
+            draw_series(&mut plot, &self.series, |index| index)
         })
     }
 }
@@ -79,7 +80,7 @@ impl Render for LineChart {
 /// The legend of a set of series: one line swatch per series, in series colours.
 pub(crate) fn line_legend(series: &[Series]) -> Vec<LegendEntry> {
     let entries = series.iter().enumerate();
-    entries.map(|(index, s)| LegendEntry::new(Swatch::Line(series_colour(index)), s.label.clone())).collect()
+    entries.map(|(index, s)| LegendEntry::new(series_swatch(index), s.label.clone())).collect()
 }
 
 /// The bounds of every finite point of the series.
@@ -87,19 +88,22 @@ pub(crate) fn series_bounds(series: &[Series]) -> Option<Bounds> {
     Bounds::of(series.iter().flat_map(|s| s.finite_points()))
 }
 
-/// Draws each series in the colour `colour(index)`: a line, or a dot for a single point.
-/// Non-finite points split nothing: they are simply left out.
-pub(crate) fn draw_series(plot: &mut Plot, series: &[Series], colour: impl Fn(usize) -> RGBColor) -> Drawn {
+/// Draws each series in the style of palette slot `slot(index)` (its colour, dashed past the
+/// palette's length): a line, or a dot for a single point. Non-finite points are left out.
+pub(crate) fn draw_series(plot: &mut Plot, series: &[Series], slot: impl Fn(usize) -> usize) -> Drawn {
     for (index, one) in series.iter().enumerate() {
         let points = one.finite_points();
-        let style = colour(index).stroke_width(2);
+        let (colour, dashed) = (series_colour(slot(index)), is_dashed(slot(index)));
         match points.len() {
             0 => {}
             1 => {
-                plot.draw_series(std::iter::once(Circle::new(points[0], 4, colour(index).filled())))?;
+                plot.draw_series(std::iter::once(Circle::new(points[0], 4, colour.filled())))?;
+            }
+            _ if dashed => {
+                plot.draw_series(DashedLineSeries::new(points, 8, 5, colour.stroke_width(2)))?;
             }
             _ => {
-                plot.draw_series(std::iter::once(PathElement::new(points, style)))?;
+                plot.draw_series(std::iter::once(PathElement::new(points, colour.stroke_width(2))))?;
             }
         }
     }

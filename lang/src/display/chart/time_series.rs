@@ -5,9 +5,8 @@ use super::axes;
 use super::bounds::Bounds;
 use super::data::{Axis, Series};
 use super::frame::{Area, Drawn, Frame};
-use super::legend::{LegendEntry, Swatch};
+use super::legend::{series_swatch, LegendEntry};
 use super::line_chart::{draw_series, draw_zero_line, series_bounds, series_summary};
-use crate::display::style::series_colour;
 use crate::display::Render;
 use crate::MimeBundle;
 
@@ -71,7 +70,7 @@ impl TimeSeries {
 
     fn frame(&self) -> Frame {
         let legend = self.labels().into_iter().enumerate();
-        let entries = legend.map(|(index, label)| LegendEntry::new(Swatch::Line(series_colour(index)), label));
+        let entries = legend.map(|(index, label)| LegendEntry::new(series_swatch(index), label));
         Frame::new(&self.title).subtitle("One panel per quantity, all on the same time axis").legend(entries.collect())
     }
 
@@ -106,11 +105,11 @@ impl TimeSeries {
         if bounds.y0 < 0.0 && bounds.y1 > 0.0 {
             draw_zero_line(&mut plot, bounds)?;
         }
-        let colour = |index: usize| {
+        let slot = |index: usize| {
             let label = &panel.series[index].label;
-            series_colour(labels.iter().position(|l| l == label).unwrap_or(index))
+            labels.iter().position(|l| l == label).unwrap_or(index)
         };
-        draw_series(&mut plot, &panel.series, colour)
+        draw_series(&mut plot, &panel.series, slot)
     }
 }
 

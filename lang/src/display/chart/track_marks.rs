@@ -4,7 +4,7 @@
 use super::axes::Plot;
 use super::data::{point_is_finite, Series, Track};
 use super::frame::Drawn;
-use super::legend::{LegendEntry, Swatch};
+use super::legend::{series_swatch, LegendEntry, Swatch};
 use super::line_chart::draw_series;
 use crate::display::style::{series_colour, INK, PLOT_BACKGROUND};
 use plotters::element::{Circle, EmptyElement, Polygon, Rectangle};
@@ -13,7 +13,7 @@ use plotters::style::Color;
 /// Draws the tracks' lines, then their landing and rest markers, in series colours.
 pub(crate) fn draw_tracks(plot: &mut Plot, tracks: &[Track]) -> Drawn {
     let lines: Vec<Series> = tracks.iter().map(|t| Series::new(t.label.clone(), t.points.clone())).collect();
-    draw_series(plot, &lines, series_colour)?;
+    draw_series(plot, &lines, |index| index)?;
     for (index, track) in tracks.iter().enumerate() {
         draw_markers(plot, track, index)?;
     }
@@ -43,7 +43,7 @@ pub(crate) fn draw_thrower(plot: &mut Plot, at: (f64, f64)) -> Drawn {
 /// Legend: one line per track, then the marker kinds that appear.
 pub(crate) fn track_legend(tracks: &[Track], thrower: bool) -> Vec<LegendEntry> {
     let mut entries: Vec<LegendEntry> = tracks.iter().enumerate()
-        .map(|(index, t)| LegendEntry::new(Swatch::Line(series_colour(index)), t.label.clone()))
+        .map(|(index, t)| LegendEntry::new(series_swatch(index), t.label.clone()))
         .collect();
     if thrower {
         entries.push(LegendEntry::new(Swatch::Triangle(INK), "release point"));
