@@ -35,6 +35,7 @@ pub(crate) fn friendly_type(value: &rhai::Dynamic) -> String {
         "ThrowValue" => "Throw".into(),
         "EnvironmentValue" => "Environment".into(),
         "FlightValue" => "Flight".into(),
+        "ChartValue" => "Chart".into(),
         other => other.into(),
     }
 }

@@ -20,7 +20,7 @@ pub(crate) use throws::ThrowValue;
 
 use crate::help::Registrar;
 use crate::output::MimeBundle;
-use crate::session::{InterruptHandle, SinkSlot};
+use crate::session::SinkSlot;
 use rhai::Dynamic;
 use std::path::PathBuf;
 
@@ -30,8 +30,6 @@ use std::path::PathBuf;
 pub(crate) struct PackageContext {
     /// Where `show` sends displays.
     pub sink: SinkSlot,
-    /// Checked between steps of long computations.
-    pub interrupt: InterruptHandle,
     /// The only folder scripts may read and write (None: no file access).
     pub study_dir: Option<PathBuf>,
 }

@@ -80,12 +80,6 @@ fn outline(ctx: &NativeCallContext, family: DiscFamily, opts: &Map) -> Fallible<
     Ok(OutlineValue { source: OutlineSource::Parametric(parametric), built })
 }
 
-/// An outline from a saved description.
-pub(crate) fn outline_from_source(source: OutlineSource) -> Result<OutlineValue, GeometryError> {
-    let built = source.build(&SamplingSettings::default())?;
-    Ok(OutlineValue { source, built })
-}
-
 /// Engine dimension errors restated in the script's keys and units, blaming a dimension the
 /// script gave when one of those is out of its range.
 fn outline_error(ctx: &NativeCallContext, outline: &ParametricOutline, given: &[Dimension], err: GeometryError) -> Box<rhai::EvalAltResult> {

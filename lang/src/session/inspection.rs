@@ -14,8 +14,10 @@ impl Session {
             return Some(MimeBundle::plain(format!("fn {name}({}) (defined in this notebook)", params.join(", "))));
         }
         let (_, _, value) = self.scope.iter_raw().find(|(n, _, _)| *n == name)?;
-        let type_name = self.engine.map_type_name(value.type_name());
-        let mut text = format!("{name}: {type_name} = {value}");
+        let type_name = crate::errors::friendly_type(value);
+        let type_name = type_name.as_str();
+        let shown = crate::render::text_of(value, &self.engine);
+        let mut text = format!("{name}: {type_name} = {shown}");
         let fields = self.docs.fields_of(type_name);
         if !fields.is_empty() {
             text.push_str(&format!("\n\n{}", self.docs.help(type_name)));

@@ -62,7 +62,7 @@ impl Session {
             .engine
             .eval_ast_with_scope(&mut self.scope, &merged)
             .map_err(|e| CellError::from_eval(&e, &self.settings, &self.docs))?;
-        Ok((!value.is_unit()).then(|| crate::render::render_value(&value)))
+        Ok((!value.is_unit()).then(|| crate::render::render_value(&value, &self.engine)))
     }
 
     /// A handle that interrupts this session's running cell from any thread.
@@ -82,7 +82,7 @@ impl Session {
 
     /// Names of the variables currently in scope, with their type names.
     pub fn variables(&self) -> Vec<(String, String)> {
-        self.scope.iter_raw().map(|(name, _, value)| (name.to_string(), self.engine.map_type_name(value.type_name()).to_string())).collect()
+        self.scope.iter_raw().map(|(name, _, value)| (name.to_string(), crate::errors::friendly_type(value))).collect()
     }
 
     /// Names of the script functions defined so far, with their parameters.

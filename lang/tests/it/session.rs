@@ -158,7 +158,7 @@ fn inspect_shows_docs_and_variables() {
     assert!(doc.text_plain().unwrap().contains("help(name: string)"));
     value(&mut s, "let carry = 42.5;");
     let v = s.inspect("carry", 5).unwrap();
-    assert_eq!(v.text_plain(), Some("carry: f64 = 42.5"));
+    assert_eq!(v.text_plain(), Some("carry: float = 42.5"));
     assert!(s.inspect("   ", 1).is_none());
 }
 
@@ -207,4 +207,40 @@ fn the_reference_page_is_current() {
     let committed = std::fs::read_to_string(&path).unwrap_or_default();
     let generated = session().docs().reference_markdown();
     assert!(committed == generated, "docs/reference.md is stale: run `cargo run -p spinfoil-lang --example reference > docs/reference.md`");
+}
+
+#[test]
+fn completion_inside_an_option_map_offers_its_keys() {
+    let s = session();
+    let code = "let t = throw_release(#{ sp";
+    let c = s.complete(code, code.chars().count());
+    assert_eq!(c.matches, vec!["speed_kmh".to_string(), "speed_mps".to_string(), "spin_rpm".to_string(), "spin_rps".to_string()]);
+    assert_eq!((c.cursor_start, c.cursor_end), (25, 27));
+}
+
+#[test]
+fn show_with_an_id_can_be_updated() {
+    let mut s = session();
+    let (_, events) = run(&mut s, "show(\"starting\", \"progress\"); for i in 1..=2 { update_display(`run ${i}`, \"progress\"); }");
+    assert_eq!(events.len(), 3);
+    assert!(matches!(&events[0], OutputEvent::Display(_, Some(id)) if id == "progress"));
+    assert!(matches!(&events[2], OutputEvent::Update(b, id) if id == "progress" && b.text_plain() == Some("run 2")));
+}
+
+#[test]
+fn inspect_a_domain_variable_lists_its_fields() {
+    let mut s = session();
+    value(&mut s, "let m = material(\"base\", 0.95);");
+    let text = s.inspect("m", 1).unwrap().text_plain().unwrap().to_string();
+    assert!(text.starts_with("m: Material = material \"base\""), "{text}");
+    assert!(text.contains(".density_g_cm3: density, g/cm³"), "{text}");
+}
+
+#[test]
+fn domain_values_print_and_render_as_readable_text() {
+    let mut s = session();
+    assert_eq!(value(&mut s, "material(\"base\", 0.95)"), "material \"base\" (0.950 g/cm³)");
+    let (_, events) = run(&mut s, "print(material(\"base\", 0.95)); show(throw_release(#{ speed_mps: 20, spin_rpm: 800 }))");
+    assert_eq!(events[0], OutputEvent::Stdout("material \"base\" (0.950 g/cm³)\n".into()));
+    assert!(matches!(&events[1], OutputEvent::Display(b, None) if b.text_plain().unwrap().starts_with("right backhand release: 20.0 m/s, 800 rpm")));
 }
