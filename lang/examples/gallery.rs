@@ -117,8 +117,11 @@ fn time_series() -> TimeSeries {
 
 fn cross_section() -> CrossSection {
     // An invented two-material driver section, half-section in (r mm, z mm).
-    let plate = vec![(0.0, 12.0), (82.0, 10.5), (84.0, 8.5), (0.0, 10.0)];
-    let rim = vec![(82.0, 10.5), (105.5, 6.0), (104.0, -0.5), (96.0, -2.5), (86.0, -1.0), (84.0, 8.5)];
+    let plate = vec![(0.0, 12.5), (84.0, 11.0), (84.0, 8.6), (0.0, 10.5)];
+    let rim = vec![
+        (84.0, 11.0), (96.0, 10.2), (102.5, 8.6), (105.5, 5.6), (105.0, 2.6), (102.0, 0.4),
+        (96.0, 0.0), (89.0, 0.8), (85.2, 3.2), (84.0, 8.6),
+    ];
     CrossSection::new("P-7 rim-heavy: section and layup")
         .region("soft base blend", 0.95, plate)
         .region("dense rim blend", 1.24, rim)

@@ -3,14 +3,14 @@
 use super::Table;
 
 const TABLE_STYLE: &str = "border-collapse:collapse;font-family:'DejaVu Sans',Helvetica,Arial,\
-sans-serif;font-size:13px;color:#222226;margin:4px 0";
+sans-serif;font-size:13px;margin:4px 0";
 const CAPTION_STYLE: &str = "caption-side:top;text-align:left;font-weight:bold;font-size:14px;\
 padding:4px 0 6px 0";
 const NAME_STYLE: &str = "padding:4px 10px 0 10px;border-bottom:none;font-weight:bold";
-const UNIT_STYLE: &str = "padding:0 10px 4px 10px;border-bottom:2px solid #5a5a60;\
-font-weight:normal;color:#69696f;font-size:12px";
-const CELL_STYLE: &str = "padding:3px 10px;border-bottom:1px solid #e2dfd8";
-const NOTE_STYLE: &str = "font-size:12px;color:#69696f;margin:2px 0";
+const UNIT_STYLE: &str = "padding:0 10px 4px 10px;border-bottom:2px solid rgba(128,128,128,0.8);\
+font-weight:normal;opacity:0.7;font-size:12px";
+const CELL_STYLE: &str = "padding:3px 10px;border-bottom:1px solid rgba(128,128,128,0.25)";
+const NOTE_STYLE: &str = "font-size:12px;opacity:0.75;margin:2px 0";
 
 impl Table {
     /// The table as a self-contained HTML fragment: a caption, a header row of names, a units
