@@ -25,6 +25,9 @@ pub(crate) enum DesignFile {
         air: AirSpec,
         /// The wind.
         wind: WindSpec,
+        /// The landing surface preset, if any.
+        #[serde(default, skip_serializing_if = "Option::is_none")]
+        ground: Option<String>,
     },
 }
 
@@ -52,7 +55,7 @@ impl DesignFile {
 
     /// The file of an environment.
     pub fn of_environment(environment: &EnvironmentValue) -> Self {
-        DesignFile::Environment { air: environment.air, wind: environment.wind }
+        DesignFile::Environment { air: environment.air, wind: environment.wind, ground: environment.ground.clone() }
     }
 
     /// The text of this file in `format`.

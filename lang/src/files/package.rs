@@ -75,7 +75,9 @@ fn register_load(reg: &mut Registrar, dir: &Arc<Option<PathBuf>>) {
     reg.doc(FnDoc::new("load_throw(path: string) -> Throw", "Loads a throw saved with save from the study folder.", "let t = load_throw(\"throws/long-hyzer.json\");"));
     let d = dir.clone();
     reg.engine.register_fn("load_environment", move |ctx: NativeCallContext, path: &str| match load(&ctx, &d, path, "environment")? {
-        DesignFile::Environment { air, wind } => EnvironmentValue::build(air, wind).map_err(|e| file_error(&ctx, format!("\"{path}\": {e}"))),
+        DesignFile::Environment { air, wind, ground } => EnvironmentValue::build(air, wind)
+            .map(|e| EnvironmentValue { ground, ..e })
+            .map_err(|e| file_error(&ctx, format!("\"{path}\": {e}"))),
         _ => unreachable_kind(&ctx),
     });
     reg.doc(FnDoc::new("load_environment(path: string) -> Environment", "Loads an environment saved with save from the study folder.", "let day = load_environment(\"days/windy.toml\");"));

@@ -62,7 +62,11 @@ fn register_disc_charts(reg: &mut Registrar) {
 
 fn track_points(f: &FlightValue, pick: fn(&nalgebra::Vector3<f64>) -> (f64, f64)) -> Track {
     let points = f.flight.samples.iter().map(|s| pick(&s.position_m)).collect();
-    Track::new(f.label.clone(), points).landing(pick(&f.flight.metrics.landing_position_m))
+    let track = Track::new(f.label.clone(), points).landing(pick(&f.flight.metrics.landing_position_m));
+    match &f.ground {
+        Some(ground) => track.rest(pick(&ground.rest_position_m)),
+        None => track,
+    }
 }
 
 fn plan_view(flights: &[FlightValue]) -> PlanView {

@@ -4,7 +4,7 @@ use crate::help::{FnDoc, Registrar};
 use crate::options::{OptionSpec, OptionValues};
 use rhai::{Map, NativeCallContext};
 use serde::{Deserialize, Serialize};
-use spinfoil_engine::{isa_temperature_k, AirProperties, AirSpec, FlightConditions, GustSpec, Terrain, WindSpec};
+use spinfoil_engine::{isa_temperature_k, AirProperties, AirSpec, FlightConditions, Ground, GustSpec, SurfacePreset, Terrain, WindSpec};
 use std::sync::Arc;
 
 /// An environment as scripts hold it: the specs (as saved) and the air they give.
@@ -14,6 +14,9 @@ pub(crate) struct EnvironmentValue {
     pub air: AirSpec,
     /// The wind's description.
     pub wind: WindSpec,
+    /// The ground surface preset the disc lands on (None: the flight ends at first contact).
+    #[serde(default)]
+    pub ground: Option<String>,
     /// The air's properties (density, viscosity, temperature, pressure).
     #[serde(skip)]
     pub properties: Option<AirProperties>,
@@ -24,7 +27,7 @@ impl EnvironmentValue {
     pub fn build(air: AirSpec, wind: WindSpec) -> Result<Self, String> {
         let properties = air.build().map_err(|e| e.to_string())?;
         wind.build().map_err(|e| e.to_string())?;
-        Ok(Self { air, wind, properties: Some(properties) })
+        Ok(Self { air, wind, ground: None, properties: Some(properties) })
     }
 
     /// The air's properties (computed again for a loaded environment).
@@ -38,10 +41,15 @@ impl EnvironmentValue {
         Ok(FlightConditions { air: self.air_properties(), wind: Arc::new(wind), ..FlightConditions::default() })
     }
 
+    /// The ground to play the landing out on, if the environment names one.
+    pub fn ground(&self) -> Result<Option<Ground>, String> {
+        self.ground.as_deref().map(|name| SurfacePreset::from_name(name).map(Ground::level).map_err(|e| e.to_string())).transpose()
+    }
+
     /// Sea-level standard air (ISO 2533 at 0 m), no wind.
     pub fn standard() -> Self {
         let air = AirSpec::standard(0.0);
-        Self { air, wind: WindSpec::calm(), properties: air.build().ok() }
+        Self { air, wind: WindSpec::calm(), ground: None, properties: air.build().ok() }
     }
 }
 
@@ -58,7 +66,10 @@ const ENVIRONMENT_OPTIONS: &[OptionSpec] = &[
     OptionSpec::choice("terrain", TERRAINS, "surface roughness preset for the wind profile (default \"open_grass\")"),
     OptionSpec::optional("gust_intensity", 0.0, 0.5, "turbulence intensity σ/mean; 0 (default) is a steady wind"),
     OptionSpec::integer("gust_seed", 0, i64::MAX, "seed of the gusts (default 0); the same seed gives the same gusts"),
+    OptionSpec::choice("ground", GROUNDS, "surface the disc lands on; with it, flights continue after landing (skips, slide or roll) to rest (default: none, flights end at first contact)"),
 ];
+
+const GROUNDS: &[&str] = &["short_grass", "long_grass", "packed_dirt", "hard_court", "sand"];
 
 /// Registers `environment` and the `Environment` type.
 pub(crate) fn register(reg: &mut Registrar) {
@@ -76,6 +87,7 @@ pub(crate) fn register(reg: &mut Registrar) {
     reg.getter("Environment", "pressure_hpa", "static pressure, hPa", |e: &mut EnvironmentValue| e.air_properties().pressure_pa / 100.0);
     reg.getter("Environment", "viscosity_pa_s", "dynamic viscosity, Pa·s", |e: &mut EnvironmentValue| e.air_properties().dynamic_viscosity_pa_s);
     reg.getter("Environment", "wind_mps", "mean wind speed at the reference height, m/s", |e: &mut EnvironmentValue| e.wind.speed_mps);
+    reg.getter("Environment", "ground", "the landing surface, or nothing", |e: &mut EnvironmentValue| e.ground.clone().map_or(rhai::Dynamic::UNIT, rhai::Dynamic::from));
     reg.getter("Environment", "wind_from_deg", "direction the wind comes from, ° (0 headwind, 180 tailwind)", |e: &mut EnvironmentValue| e.wind.from_deg);
     reg.engine.register_fn("to_string", |e: &mut EnvironmentValue| {
         let p = e.air_properties();
@@ -115,5 +127,7 @@ fn wind_spec(v: &OptionValues) -> WindSpec {
 
 fn environment(ctx: NativeCallContext, opts: Map) -> Fallible<EnvironmentValue> {
     let v = options(&ctx, &opts, ENVIRONMENT_OPTIONS)?;
-    EnvironmentValue::build(air_spec(&v)?, wind_spec(&v)).map_err(|e| design_error(&ctx, e))
+    let mut environment = EnvironmentValue::build(air_spec(&v)?, wind_spec(&v)).map_err(|e| design_error(&ctx, e))?;
+    environment.ground = v.text("ground").map(str::to_string);
+    Ok(environment)
 }

@@ -6,7 +6,7 @@ use super::throws::ThrowValue;
 use crate::help::{FnDoc, Registrar};
 use crate::{Cell, Table};
 use rhai::NativeCallContext;
-use spinfoil_engine::{Flight, FlightMetrics, FlightSettings, ReleaseState};
+use spinfoil_engine::{fly_to_rest, Flight, FlightMetrics, FlightSettings, GroundPlay, GroundSettings, ReleaseState};
 use std::sync::Arc;
 
 /// A flight as scripts hold it: the engine's flight and what it was flown with.
@@ -18,6 +18,8 @@ pub(crate) struct FlightValue {
     pub release: ReleaseState,
     /// The computed flight.
     pub flight: Arc<Flight>,
+    /// The ground play after landing, when the environment names a ground.
+    pub ground: Option<Arc<GroundPlay>>,
 }
 
 const RPM_PER_RAD_S: f64 = 60.0 / std::f64::consts::TAU;
@@ -26,8 +28,14 @@ const RPM_PER_RAD_S: f64 = 60.0 / std::f64::consts::TAU;
 pub(crate) fn fly_disc(disc: &DiscValue, throw: &ThrowValue, environment: &EnvironmentValue) -> Result<FlightValue, String> {
     let release = throw.release_for(disc)?;
     let conditions = environment.conditions()?;
-    let flight = spinfoil_engine::fly(&disc.body(), &disc.aero, &release, &conditions, &FlightSettings::default()).map_err(|e| e.to_string())?;
-    Ok(FlightValue { label: disc.design.name.clone(), release, flight: Arc::new(flight) })
+    let label = disc.design.name.clone();
+    let settings = FlightSettings::default();
+    if let Some(ground) = environment.ground()? {
+        let to_rest = fly_to_rest(&disc.body(), &disc.aero, &release, &conditions, &settings, &ground, &GroundSettings::default()).map_err(|e| e.to_string())?;
+        return Ok(FlightValue { label, release, flight: Arc::new(to_rest.flight), ground: Some(Arc::new(to_rest.ground)) });
+    }
+    let flight = spinfoil_engine::fly(&disc.body(), &disc.aero, &release, &conditions, &settings).map_err(|e| e.to_string())?;
+    Ok(FlightValue { label, release, flight: Arc::new(flight), ground: None })
 }
 
 /// Registers `fly`, the `Flight` type and its exports.
@@ -91,6 +99,7 @@ fn register_metric_fields(reg: &mut Registrar) {
         reg.getter("Flight", field, doc, move |f: &mut FlightValue| get(f));
     }
     reg.getter("Flight", "name", "the disc's name", |f: &mut FlightValue| f.label.clone());
+    register_ground_fields(reg);
     reg.getter("Flight", "landed", "true when the flight ended by ground contact", |f: &mut FlightValue| f.flight.landed);
 }
 
@@ -125,4 +134,16 @@ pub(crate) fn trajectory_table(f: &FlightValue) -> Table {
         table = table.row(row);
     }
     table
+}
+
+fn register_ground_fields(reg: &mut Registrar) {
+    let ground = |f: &FlightValue, get: fn(&GroundPlay) -> f64| f.ground.as_ref().map_or(rhai::Dynamic::UNIT, |g| rhai::Dynamic::from_float(get(g)));
+    reg.getter("Flight", "ground_play_m", "distance from landing to rest, m (nothing without a ground)", move |f: &mut FlightValue| ground(f, |g| g.ground_play_m));
+    reg.getter("Flight", "time_to_rest_s", "time from landing to rest, s (nothing without a ground)", move |f: &mut FlightValue| ground(f, |g| g.time_to_rest_s));
+    reg.getter("Flight", "rest_downrange_m", "downrange x of the rest point, m (nothing without a ground)", move |f: &mut FlightValue| ground(f, |g| g.rest_position_m.x));
+    reg.getter("Flight", "rest_lateral_m", "lateral y of the rest point, m, left positive (nothing without a ground)", move |f: &mut FlightValue| ground(f, |g| g.rest_position_m.y));
+    reg.getter("Flight", "skips", "times the disc left the ground again after landing (nothing without a ground)", move |f: &mut FlightValue| ground(f, |g| g.skips as f64));
+    reg.getter("Flight", "ground_ending", "how the ground play ended (\"stopped\", \"slid\", ...; nothing without a ground)", |f: &mut FlightValue| {
+        f.ground.as_ref().map_or(rhai::Dynamic::UNIT, |g| rhai::Dynamic::from(g.describe()))
+    });
 }

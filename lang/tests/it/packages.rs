@@ -357,3 +357,22 @@ fn show_sends_a_display_and_flights_render_a_table() {
     let events = sink.take();
     assert!(matches!(&events[0], spinfoil_lang::OutputEvent::Display(b, None) if b.data.contains_key("text/html")));
 }
+
+#[test]
+fn a_ground_in_the_environment_plays_the_landing_out_to_rest() {
+    let mut s = session();
+    value(&mut s, TWO_DISCS);
+    value(&mut s, "let t = throw_release(#{ speed_mps: 22, spin_rpm: 850, launch_deg: 10 }); let f = fly(one_piece, t, environment(#{ ground: \"packed_dirt\" }));");
+    let plate = Material::from_g_cm3("soft base blend", 0.95).unwrap();
+    let report = engine_design(Layup::single(plate));
+    let body = spinfoil_engine::DiscBody::from_mass_properties(&report.properties, report.outline.diameter_m());
+    let release = spinfoil_engine::ReleasePose { launch_rad: 10f64.to_radians(), ..Default::default() }
+        .with_speed_and_spin(22.0, 850.0 / 60.0 * std::f64::consts::TAU);
+    let conditions = spinfoil_engine::FlightConditions { air: spinfoil_engine::AirSpec::standard(0.0).build().unwrap(), ..Default::default() };
+    let ground = spinfoil_engine::Ground::level(spinfoil_engine::SurfacePreset::PackedDirt);
+    let to_rest = spinfoil_engine::fly_to_rest(&body, &spinfoil_engine::demo_driver(), &release, &conditions, &Default::default(), &ground, &Default::default()).unwrap();
+    assert_same(&mut s, "f.ground_play_m", to_rest.ground.ground_play_m);
+    assert_same(&mut s, "f.carry_m", to_rest.flight.metrics.carry_m);
+    assert_eq!(value(&mut s, "f.ground_ending"), to_rest.ground.describe());
+    assert_eq!(value(&mut s, "type_of(fly(one_piece, t).ground_play_m)"), "()", "no ground, no ground play");
+}
