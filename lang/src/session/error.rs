@@ -32,7 +32,14 @@ impl CellError {
     }
 
     /// A syntax error from compiling a cell.
-    pub(crate) fn from_parse(err: &ParseError) -> Self {
+    pub(crate) fn from_parse(err: &ParseError, settings: &SessionSettings) -> Self {
+        if matches!(err.err_type(), rhai::ParseErrorType::ExprTooDeep) {
+            let message = format!(
+                "expressions nested deeper than {} levels ({} inside functions; limits max_expression_depth, max_function_expression_depth)",
+                settings.max_expression_depth, settings.max_function_expression_depth
+            );
+            return Self::at("LimitError", message, err.position());
+        }
         Self::at("SyntaxError", err.err_type().to_string(), err.position())
     }
 

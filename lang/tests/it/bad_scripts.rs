@@ -69,6 +69,7 @@ const CATALOGUE: &[(&str, &str, &str)] = &[
     ("fn down(x) { down(x + 1) } down(0)", "LimitError", "levels (limit max_call_depth)"),
     ("let a = []; a.pad(10000000, 0);", "LimitError", "at most 1000000 elements"),
     ("let s = \"spin\"; loop { s += s; }", "LimitError", "too large"),
+    ("let deep = ((((((((((((((((((((((((((((((((((((((((((((((((((((((((((((((((((((1))))))))))))))))))))))))))))))))))))))))))))))))))))))))))))))))))));", "LimitError", "nested deeper than 64 levels"),
     // Arithmetic, indexing, files.
     ("let zero = 0; 1 / zero", "ArithmeticError", "Division by zero"),
     ("9223372036854775807 + 1", "ArithmeticError", "Addition overflow"),

@@ -244,3 +244,31 @@ fn domain_values_print_and_render_as_readable_text() {
     assert_eq!(events[0], OutputEvent::Stdout("material \"base\" (0.950 g/cm³)\n".into()));
     assert!(matches!(&events[1], OutputEvent::Display(b, None) if b.text_plain().unwrap().starts_with("right backhand release: 20.0 m/s, 800 rpm")));
 }
+
+#[test]
+fn interrupt_stops_a_long_study_of_many_flights() {
+    let mut s = session();
+    value(&mut s, "let d = disc(\"P-7\", driver_outline(), single_layup(material(\"base\", 0.95)), #{ mass_g: 174 }); let t = throw_release(#{ speed_mps: 22, spin_rpm: 850 });");
+    let handle = s.interrupt_handle();
+    let stopper = std::thread::spawn(move || {
+        std::thread::sleep(Duration::from_millis(300));
+        handle.interrupt();
+        Instant::now()
+    });
+    let (result, _) = run(&mut s, "let carries = []; loop { carries.push(fly(d, t).carry_m); }");
+    let stopped = Instant::now();
+    let asked = stopper.join().unwrap();
+    assert_eq!(result.unwrap_err().kind, "Interrupted");
+    // Behavioural bound (not a performance check): one flight takes milliseconds, so the check
+    // between calls stops the study well within a second; slack for a loaded CI machine.
+    assert!(stopped.duration_since(asked) < Duration::from_secs(3), "took {:?}", stopped.duration_since(asked));
+    assert_eq!(value(&mut s, "carries.len() > 0"), "true", "variables set before the interrupt are kept");
+}
+
+#[test]
+fn help_lists_a_types_fields() {
+    let mut s = session();
+    let text = value(&mut s, "help(\"Flight\")");
+    assert!(text.contains(".carry_m: horizontal distance from release to landing, m"), "{text}");
+    assert!(text.contains(".fade_m"), "{text}");
+}
