@@ -73,11 +73,15 @@ impl Session {
         let chars: Vec<char> = receiver.chars().collect();
         let name = super::scan::identifier_before(&chars, chars.len()).unwrap_or_default();
         let type_name = self.variables().into_iter().find(|(n, _)| *n == name).map(|(_, t)| t);
-        self.docs
-            .fields
-            .iter()
-            .filter(|f| type_name.as_ref().map_or(true, |t| *t == f.type_name))
-            .map(|f| f.field.clone())
-            .collect()
+        let fields = self.docs.fields.iter().filter(|f| type_name.as_ref().map_or(true, |t| *t == f.type_name)).map(|f| f.field.clone());
+        let methods = self.docs.functions.iter().filter(|d| type_name.as_ref().is_some_and(|t| first_parameter_type(&d.signature).contains(t.as_str())));
+        fields.chain(methods.map(|d| d.name.clone())).collect()
     }
+}
+
+/// The type of a signature's first parameter: `to_csv(flight: Flight) -> string` → `Flight`.
+fn first_parameter_type(signature: &str) -> &str {
+    let inside = signature.split_once('(').map_or("", |(_, rest)| rest);
+    let first = inside.split([',', ')']).next().unwrap_or("");
+    first.split_once(':').map_or("", |(_, t)| t.trim())
 }

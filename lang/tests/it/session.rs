@@ -272,3 +272,12 @@ fn help_lists_a_types_fields() {
     assert!(text.contains(".carry_m: horizontal distance from release to landing, m"), "{text}");
     assert!(text.contains(".fade_m"), "{text}");
 }
+
+#[test]
+fn completion_after_a_dot_offers_fields_and_methods_of_the_type() {
+    let mut s = session();
+    value(&mut s, "let d = disc(\"P-7\", driver_outline(), single_layup(material(\"base\", 0.95))); let f = fly(d, throw_release(#{ speed_mps: 20, spin_rpm: 800 }));");
+    let c = s.complete("f.t", 3);
+    assert!(c.matches.contains(&"time_aloft_s".to_string()) && c.matches.contains(&"trajectory".to_string()) && c.matches.contains(&"to_csv".to_string()), "{c:?}");
+    assert!(!c.matches.contains(&"to_svg".to_string()), "charts' methods are not a flight's: {c:?}");
+}
