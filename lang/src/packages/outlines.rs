@@ -3,7 +3,7 @@ use super::args::{design_error, options, Fallible};
 use crate::help::{FnDoc, Registrar};
 use crate::options::OptionSpec;
 use rhai::{Map, NativeCallContext};
-use spinfoil_engine::{Dimension, DiscFamily, GeometryError, Outline, OutlineSource, ParametricOutline, SamplingSettings};
+use spinfoil_engine::{Dimension, DiscFamily, GeometryError, Outline, OutlineSource, ParametricOutline, RzPoint, SamplingSettings};
 
 /// An outline as scripts hold it: how it was described and the polygon it builds to.
 #[derive(Debug, Clone, PartialEq)]
@@ -51,7 +51,30 @@ pub(crate) fn register(reg: &mut Registrar) {
         );
         reg.doc(FnDoc::new(&doc, &summary, &format!("let o = {name}(#{{ diameter_cm: 21.1, rim_width_cm: 2.0, plate_mm: 2.0 }});")).with_options(OUTLINE_OPTIONS));
     }
+    reg.engine.register_fn("outline_points", outline_points);
+    reg.doc(FnDoc::new(
+        "outline_points(points: array of [r_cm, z_cm]) -> Outline",
+        "An outline from measured points of the half cross-section: radius r from the axis and height z, in cm, in order around the section (at least 3; closed, no self-crossing, r ≥ 0).",
+        "let o = outline_points([[0, 1.6], [10.55, 1.2], [10.55, 0.0], [8.4, 0.0], [8.4, 1.0], [0, 1.0]]);",
+    ));
     register_fields(reg);
+}
+
+fn outline_points(ctx: NativeCallContext, points: rhai::Array) -> Fallible<OutlineValue> {
+    let mut rz = Vec::with_capacity(points.len());
+    for (i, point) in points.iter().enumerate() {
+        let pair = point.read_lock::<rhai::Array>().map(|a| a.iter().map(number_of).collect::<Vec<_>>());
+        match pair.as_deref() {
+            Some([Some(r), Some(z)]) => rz.push(RzPoint::new(r / 100.0, z / 100.0)),
+            _ => return Err(super::args::value_error(&ctx, format!("point {i} must be [r_cm, z_cm] (two numbers), got {point}"))),
+        }
+    }
+    let built = Outline::from_points(rz).map_err(|e| design_error(&ctx, e))?;
+    Ok(OutlineValue { source: OutlineSource::Points(built.clone()), built })
+}
+
+fn number_of(value: &rhai::Dynamic) -> Option<f64> {
+    value.as_float().ok().or_else(|| value.as_int().ok().map(|i| i as f64))
 }
 
 fn register_fields(reg: &mut Registrar) {

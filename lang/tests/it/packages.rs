@@ -376,3 +376,19 @@ fn a_ground_in_the_environment_plays_the_landing_out_to_rest() {
     assert_eq!(value(&mut s, "f.ground_ending"), to_rest.ground.describe());
     assert_eq!(value(&mut s, "type_of(fly(one_piece, t).ground_play_m)"), "()", "no ground, no ground play");
 }
+
+#[test]
+fn outlines_from_points_match_the_engine() {
+    let mut s = session();
+    value(&mut s, "let o = outline_points([[0, 1.6], [10.55, 1.2], [10.55, 0.0], [8.4, 0.0], [8.4, 1.0], [0, 1.0]]);");
+    let points = [(0.0, 1.6), (10.55, 1.2), (10.55, 0.0), (8.4, 0.0), (8.4, 1.0), (0.0, 1.0)];
+    let engine = spinfoil_engine::Outline::from_points(points.iter().map(|(r, z)| spinfoil_engine::RzPoint::new(r / 100.0, z / 100.0)).collect()).unwrap();
+    assert_same(&mut s, "o.area_cm2", engine.area_m2() * 1e4);
+    assert_same(&mut s, "o.diameter_cm", engine.diameter_m() * 100.0);
+    assert_eq!(value(&mut s, "o.family"), "points");
+    let e = error(&mut s, "outline_points([[0, 0], [1, 1], [1, 0], [0, 1]])");
+    assert_eq!(e.kind, "DesignError");
+    assert!(e.message.contains("intersects itself"), "{}", e.message);
+    let e = error(&mut s, "outline_points([[0, 0], [1], [1, 0]])");
+    assert!(e.message.contains("point 1 must be [r_cm, z_cm]"), "{}", e.message);
+}
