@@ -20,7 +20,9 @@ fn main() {
         match event {
             OutputEvent::Stdout(text) => print!("{text}"),
             OutputEvent::Stderr(text) => eprint!("{text}"),
-            OutputEvent::Display(bundle, _) | OutputEvent::Update(bundle, _) => println!("{}\n", bundle.text_plain().unwrap_or_default()),
+            OutputEvent::Display(bundle, _) | OutputEvent::Update(bundle, _) => {
+                println!("{}\n", bundle.text_plain().unwrap_or_default())
+            }
         }
     }
     match result {

@@ -43,7 +43,11 @@ pub(crate) enum Format {
 impl Format {
     /// The format of `path` (TOML for `.toml`, otherwise JSON).
     pub fn of(path: &str) -> Self {
-        if path.to_ascii_lowercase().ends_with(".toml") { Format::Toml } else { Format::Json }
+        if path.to_ascii_lowercase().ends_with(".toml") {
+            Format::Toml
+        } else {
+            Format::Json
+        }
     }
 }
 

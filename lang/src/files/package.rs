@@ -25,7 +25,9 @@ pub(crate) fn register(reg: &mut Registrar, study_dir: Option<PathBuf>) {
     register_save(reg, &dir);
     register_load(reg, &dir);
     let d = dir.clone();
-    reg.engine.register_fn("save_text", move |ctx: NativeCallContext, text: &str, path: &str| save_text(&ctx, &d, text, path));
+    reg.engine.register_fn("save_text", move |ctx: NativeCallContext, text: &str, path: &str| {
+        save_text(&ctx, &d, text, path)
+    });
     reg.doc(FnDoc::new(
         "save_text(text: string, path: string) -> string",
         "Writes text (a CSV or JSON export, an SVG chart) to a file in the study folder (.csv, .json, .txt, .md, .svg, .html); returns the path.",
@@ -36,7 +38,9 @@ pub(crate) fn register(reg: &mut Registrar, study_dir: Option<PathBuf>) {
         save_text(&ctx, &d, &crate::packages::trajectory_table(&f).to_csv(), path)
     });
     let d = dir.clone();
-    reg.engine.register_fn("save_csv", move |ctx: NativeCallContext, t: Table, path: &str| save_text(&ctx, &d, &t.to_csv(), path));
+    reg.engine.register_fn("save_csv", move |ctx: NativeCallContext, t: Table, path: &str| {
+        save_text(&ctx, &d, &t.to_csv(), path)
+    });
     reg.doc(FnDoc::new(
         "save_csv(result: Flight or Table, path: string) -> string",
         "Writes a flight's trajectory or a table as CSV (headers carry units) to a file in the study folder; returns the path.",
@@ -46,9 +50,13 @@ pub(crate) fn register(reg: &mut Registrar, study_dir: Option<PathBuf>) {
 
 fn register_save(reg: &mut Registrar, dir: &Arc<Option<PathBuf>>) {
     let d = dir.clone();
-    reg.engine.register_fn("save", move |ctx: NativeCallContext, x: DiscValue, path: &str| save_design(&ctx, &d, &DesignFile::of_disc(&x), path));
+    reg.engine.register_fn("save", move |ctx: NativeCallContext, x: DiscValue, path: &str| {
+        save_design(&ctx, &d, &DesignFile::of_disc(&x), path)
+    });
     let d = dir.clone();
-    reg.engine.register_fn("save", move |ctx: NativeCallContext, x: ThrowValue, path: &str| save_design(&ctx, &d, &DesignFile::Throw { throw: x }, path));
+    reg.engine.register_fn("save", move |ctx: NativeCallContext, x: ThrowValue, path: &str| {
+        save_design(&ctx, &d, &DesignFile::Throw { throw: x }, path)
+    });
     let d = dir.clone();
     reg.engine.register_fn("save", move |ctx: NativeCallContext, x: EnvironmentValue, path: &str| {
         save_design(&ctx, &d, &DesignFile::of_environment(&x), path)
@@ -62,25 +70,45 @@ fn register_save(reg: &mut Registrar, dir: &Arc<Option<PathBuf>>) {
 
 fn register_load(reg: &mut Registrar, dir: &Arc<Option<PathBuf>>) {
     let d = dir.clone();
-    reg.engine.register_fn("load_disc", move |ctx: NativeCallContext, path: &str| match load(&ctx, &d, path, "disc")? {
-        DesignFile::Disc { design, aero } => DiscValue::evaluate(design, &aero).map_err(|e| file_error(&ctx, format!("\"{path}\": {e}"))),
-        _ => unreachable_kind(&ctx),
+    reg.engine.register_fn("load_disc", move |ctx: NativeCallContext, path: &str| {
+        match load(&ctx, &d, path, "disc")? {
+            DesignFile::Disc { design, aero } => {
+                DiscValue::evaluate(design, &aero).map_err(|e| file_error(&ctx, format!("\"{path}\": {e}")))
+            }
+            _ => unreachable_kind(&ctx),
+        }
     });
-    reg.doc(FnDoc::new("load_disc(path: string) -> Disc", "Loads a disc saved with save (JSON or TOML) from the study folder and evaluates it again.", "let d = load_disc(\"designs/p7-rim-heavy.toml\");"));
+    reg.doc(FnDoc::new(
+        "load_disc(path: string) -> Disc",
+        "Loads a disc saved with save (JSON or TOML) from the study folder and evaluates it again.",
+        "let d = load_disc(\"designs/p7-rim-heavy.toml\");",
+    ));
     let d = dir.clone();
-    reg.engine.register_fn("load_throw", move |ctx: NativeCallContext, path: &str| match load(&ctx, &d, path, "throw")? {
-        DesignFile::Throw { throw } => Ok(throw),
-        _ => unreachable_kind(&ctx),
+    reg.engine.register_fn("load_throw", move |ctx: NativeCallContext, path: &str| {
+        match load(&ctx, &d, path, "throw")? {
+            DesignFile::Throw { throw } => Ok(throw),
+            _ => unreachable_kind(&ctx),
+        }
     });
-    reg.doc(FnDoc::new("load_throw(path: string) -> Throw", "Loads a throw saved with save from the study folder.", "let t = load_throw(\"throws/long-hyzer.json\");"));
+    reg.doc(FnDoc::new(
+        "load_throw(path: string) -> Throw",
+        "Loads a throw saved with save from the study folder.",
+        "let t = load_throw(\"throws/long-hyzer.json\");",
+    ));
     let d = dir.clone();
-    reg.engine.register_fn("load_environment", move |ctx: NativeCallContext, path: &str| match load(&ctx, &d, path, "environment")? {
-        DesignFile::Environment { air, wind, ground } => EnvironmentValue::build(air, wind)
-            .map(|e| EnvironmentValue { ground, ..e })
-            .map_err(|e| file_error(&ctx, format!("\"{path}\": {e}"))),
-        _ => unreachable_kind(&ctx),
+    reg.engine.register_fn("load_environment", move |ctx: NativeCallContext, path: &str| {
+        match load(&ctx, &d, path, "environment")? {
+            DesignFile::Environment { air, wind, ground } => EnvironmentValue::build(air, wind)
+                .map(|e| EnvironmentValue { ground, ..e })
+                .map_err(|e| file_error(&ctx, format!("\"{path}\": {e}"))),
+            _ => unreachable_kind(&ctx),
+        }
     });
-    reg.doc(FnDoc::new("load_environment(path: string) -> Environment", "Loads an environment saved with save from the study folder.", "let day = load_environment(\"days/windy.toml\");"));
+    reg.doc(FnDoc::new(
+        "load_environment(path: string) -> Environment",
+        "Loads an environment saved with save from the study folder.",
+        "let day = load_environment(\"days/windy.toml\");",
+    ));
 }
 
 fn unreachable_kind<T>(ctx: &NativeCallContext) -> Fallible<T> {
@@ -101,7 +129,8 @@ fn save_design(ctx: &NativeCallContext, dir: &Option<PathBuf>, file: &DesignFile
 fn load(ctx: &NativeCallContext, dir: &Option<PathBuf>, path: &str, kind: &str) -> Fallible<DesignFile> {
     let full = folder(ctx, dir)?.for_reading(path, DESIGN_EXTENSIONS).map_err(|e| file_error(ctx, e))?;
     let text = read_text(&full, path).map_err(|e| file_error(ctx, e))?;
-    let file = DesignFile::from_text(&text, Format::of(path)).map_err(|e| file_error(ctx, format!("\"{path}\" is not a valid design file: {e}")))?;
+    let file = DesignFile::from_text(&text, Format::of(path))
+        .map_err(|e| file_error(ctx, format!("\"{path}\" is not a valid design file: {e}")))?;
     if file.kind() != kind {
         return Err(file_error(ctx, format!("\"{path}\" holds a {}, not a {kind}", file.kind())));
     }

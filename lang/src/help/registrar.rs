@@ -31,14 +31,30 @@ impl<'a> Registrar<'a> {
     /// Records the doc of a readable field of `type_name`.
     pub fn field_doc(&mut self, type_name: &str, field: &str, summary: &str) {
         let section = self.section.clone();
-        self.docs.fields.push(FieldDoc { type_name: type_name.into(), field: field.into(), summary: summary.into(), section });
+        self.docs.fields.push(FieldDoc {
+            type_name: type_name.into(),
+            field: field.into(),
+            summary: summary.into(),
+            section,
+        });
     }
 }
 
 impl Registrar<'_> {
+    /// Registers how a script type shows as text, for `print`, `debug` and string interpolation.
+    pub fn text<T: rhai::Variant + Clone>(&mut self, show: impl Fn(&mut T) -> String + Clone + Send + Sync + 'static) {
+        self.engine.register_fn("to_string", show.clone());
+        self.engine.register_fn("to_debug", show);
+    }
+
     /// Registers a read-only field `field` on the script type `type_name` with its doc.
-    pub fn getter<T, V>(&mut self, type_name: &str, field: &str, summary: &str, get: impl Fn(&mut T) -> V + Send + Sync + 'static)
-    where
+    pub fn getter<T, V>(
+        &mut self,
+        type_name: &str,
+        field: &str,
+        summary: &str,
+        get: impl Fn(&mut T) -> V + Send + Sync + 'static,
+    ) where
         T: rhai::Variant + Clone,
         V: rhai::Variant + Clone,
     {

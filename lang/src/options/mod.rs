@@ -5,6 +5,6 @@
 mod spec;
 mod values;
 
+pub(crate) use spec::{fmt_num, fmt_short};
 pub use spec::{OptionKind, OptionSpec};
 pub use values::{read_options, OptionValues};
-pub(crate) use spec::{fmt_num, fmt_short};

@@ -148,7 +148,10 @@ impl OptionValues {
         match given.as_slice() {
             [key] => Ok((key, self.numbers[*key])),
             [] => Err(self.error(&format!("give one of the options {}", keys.join(", ")))),
-            _ => Err(self.error(&format!("give only one of the options {} (they are the same quantity in other units)", given.join(", ")))),
+            _ => Err(self.error(&format!(
+                "give only one of the options {} (they are the same quantity in other units)",
+                given.join(", ")
+            ))),
         }
     }
 

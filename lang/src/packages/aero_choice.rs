@@ -1,5 +1,7 @@
 //! The aerodynamic coefficient sets a disc can carry, by name.
-use spinfoil_engine::{demo_driver, demo_midrange, demo_putter, hummel_2003, DiscFamily, LinearCoefficients, OutlineSource};
+use spinfoil_engine::{
+    demo_driver, demo_midrange, demo_putter, hummel_2003, DiscFamily, LinearCoefficients, OutlineSource,
+};
 
 /// Names accepted by the `aero` option of `disc`.
 pub(crate) const AERO_NAMES: &[&str] = &["demo_putter", "demo_midrange", "demo_driver", "hummel_2003"];

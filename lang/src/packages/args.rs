@@ -10,7 +10,12 @@ pub(crate) fn number_arg(ctx: &NativeCallContext, arg: &str, value: &Dynamic, mi
     let x = match (value.as_float(), value.as_int()) {
         (Ok(x), _) => x,
         (_, Ok(i)) => i as f64,
-        _ => return Err(value_error(ctx, format!("{arg} must be a number, got {value} (a {})", crate::errors::friendly_type(value)))),
+        _ => {
+            return Err(value_error(
+                ctx,
+                format!("{arg} must be a number, got {value} (a {})", crate::errors::friendly_type(value)),
+            ))
+        }
     };
     if !x.is_finite() || x < min || x > max {
         let range = format!("{} to {}", crate::options::fmt_num(min), crate::options::fmt_num(max));
@@ -35,6 +40,10 @@ pub(crate) fn engine_error(ctx: &NativeCallContext, err: impl std::fmt::Display)
 }
 
 /// Reads the option map of a call with `specs`.
-pub(crate) fn options(ctx: &NativeCallContext, map: &rhai::Map, specs: &[crate::options::OptionSpec]) -> Fallible<crate::options::OptionValues> {
+pub(crate) fn options(
+    ctx: &NativeCallContext,
+    map: &rhai::Map,
+    specs: &[crate::options::OptionSpec],
+) -> Fallible<crate::options::OptionValues> {
     crate::options::read_options(map, specs, ctx.fn_name(), ctx.call_position())
 }

@@ -5,7 +5,9 @@ use super::discs::DiscValue;
 use super::flights::FlightValue;
 use crate::help::{FnDoc, Registrar};
 use crate::output::MimeBundle;
-use crate::{Axis, CoefficientCurves, CrossSection, MassBars, Panel, PlanView, Render, Series, SideView, TimeSeries, Track};
+use crate::{
+    Axis, CoefficientCurves, CrossSection, MassBars, Panel, PlanView, Render, Series, SideView, TimeSeries, Track,
+};
 use rhai::{Array, NativeCallContext};
 use spinfoil_engine::fill_outline;
 
@@ -28,9 +30,14 @@ const RPM_PER_RAD_S: f64 = 60.0 / std::f64::consts::TAU;
 pub(crate) fn register(reg: &mut Registrar) {
     reg.section("charts", "pictures of flights and discs (SVG in notebooks, a short summary in a terminal)");
     reg.engine.register_type_with_name::<ChartValue>("Chart");
-    reg.engine.register_fn("to_svg", |c: &mut ChartValue| c.bundle.data.get("image/svg+xml").cloned().unwrap_or_default());
-    reg.doc(FnDoc::new("to_svg(chart: Chart) -> string", "The chart as SVG text (save it with save_text).", "save_text(plan_view([a, b]).to_svg(), \"plan.svg\");"));
-    reg.engine.register_fn("to_string", |c: &mut ChartValue| c.bundle.text_plain().unwrap_or_default().to_string());
+    reg.engine
+        .register_fn("to_svg", |c: &mut ChartValue| c.bundle.data.get("image/svg+xml").cloned().unwrap_or_default());
+    reg.doc(FnDoc::new(
+        "to_svg(chart: Chart) -> string",
+        "The chart as SVG text (save it with save_text).",
+        "save_text(plan_view([a, b]).to_svg(), \"plan.svg\");",
+    ));
+    reg.text(|c: &mut ChartValue| c.bundle.text_plain().unwrap_or_default().to_string());
     register_flight_charts(reg);
     register_disc_charts(reg);
 }
@@ -40,22 +47,42 @@ fn flights_arg(ctx: &NativeCallContext, items: Array) -> Fallible<Vec<FlightValu
 }
 
 fn register_flight_charts(reg: &mut Registrar) {
-    reg.engine.register_fn("plan_view", |ctx: NativeCallContext, items: Array| Ok::<_, Box<rhai::EvalAltResult>>(ChartValue::of(&plan_view(&flights_arg(&ctx, items)?))));
+    reg.engine.register_fn("plan_view", |ctx: NativeCallContext, items: Array| {
+        Ok::<_, Box<rhai::EvalAltResult>>(ChartValue::of(&plan_view(&flights_arg(&ctx, items)?)))
+    });
     reg.engine.register_fn("plan_view", |f: FlightValue| ChartValue::of(&plan_view(&[f])));
     reg.doc(FnDoc::new("plan_view(flights: Flight or array of Flight) -> Chart", "Ground tracks seen from above: downrange x (m) against lateral y (m, left positive), landing points marked, with the safety caution.", "plan_view([fly(a, arm, day), fly(b, arm, day)])"));
-    reg.engine.register_fn("side_view", |ctx: NativeCallContext, items: Array| Ok::<_, Box<rhai::EvalAltResult>>(ChartValue::of(&side_view(&flights_arg(&ctx, items)?))));
+    reg.engine.register_fn("side_view", |ctx: NativeCallContext, items: Array| {
+        Ok::<_, Box<rhai::EvalAltResult>>(ChartValue::of(&side_view(&flights_arg(&ctx, items)?)))
+    });
     reg.engine.register_fn("side_view", |f: FlightValue| ChartValue::of(&side_view(&[f])));
-    reg.doc(FnDoc::new("side_view(flights: Flight or array of Flight) -> Chart", "Height z (m) against downrange x (m).", "side_view(fly(d, t))"));
-    reg.engine.register_fn("time_series", |ctx: NativeCallContext, items: Array| Ok::<_, Box<rhai::EvalAltResult>>(ChartValue::of(&time_series(&flights_arg(&ctx, items)?))));
+    reg.doc(FnDoc::new(
+        "side_view(flights: Flight or array of Flight) -> Chart",
+        "Height z (m) against downrange x (m).",
+        "side_view(fly(d, t))",
+    ));
+    reg.engine.register_fn("time_series", |ctx: NativeCallContext, items: Array| {
+        Ok::<_, Box<rhai::EvalAltResult>>(ChartValue::of(&time_series(&flights_arg(&ctx, items)?)))
+    });
     reg.engine.register_fn("time_series", |f: FlightValue| ChartValue::of(&time_series(&[f])));
     reg.doc(FnDoc::new("time_series(flights: Flight or array of Flight) -> Chart", "Speed (m/s), spin (rpm), roll (°, hyzer positive), angle of attack (°) and wobble (°) against time (s), one panel each.", "time_series([a, b])"));
 }
 
 fn register_disc_charts(reg: &mut Registrar) {
     reg.engine.register_fn("cross_section", |ctx: NativeCallContext, d: DiscValue| cross_section(&ctx, &d));
-    reg.doc(FnDoc::new("cross_section(disc: Disc) -> Chart", "The disc's cross-section (mm) with its layup regions shaded by material.", "cross_section(rim_heavy)"));
-    reg.engine.register_fn("mass_bars", |ctx: NativeCallContext, items: Array| Ok::<_, Box<rhai::EvalAltResult>>(ChartValue::of(&mass_bars(&items_of::<DiscValue>(&ctx, &items, "Disc")?))));
-    reg.doc(FnDoc::new("mass_bars(discs: array of Disc) -> Chart", "Bars of the spin and transverse moments of inertia I_z and I_x (g·cm²) of several discs.", "mass_bars([one_piece, rim_heavy])"));
+    reg.doc(FnDoc::new(
+        "cross_section(disc: Disc) -> Chart",
+        "The disc's cross-section (mm) with its layup regions shaded by material.",
+        "cross_section(rim_heavy)",
+    ));
+    reg.engine.register_fn("mass_bars", |ctx: NativeCallContext, items: Array| {
+        Ok::<_, Box<rhai::EvalAltResult>>(ChartValue::of(&mass_bars(&items_of::<DiscValue>(&ctx, &items, "Disc")?)))
+    });
+    reg.doc(FnDoc::new(
+        "mass_bars(discs: array of Disc) -> Chart",
+        "Bars of the spin and transverse moments of inertia I_z and I_x (g·cm²) of several discs.",
+        "mass_bars([one_piece, rim_heavy])",
+    ));
     reg.engine.register_fn("coefficient_curves", |d: DiscValue| ChartValue::of(&coefficient_curves(&d)));
     reg.doc(FnDoc::new("coefficient_curves(disc: Disc) -> Chart", "The disc's lift, drag and pitching-moment coefficients against angle of attack (−10° to 30°), with the set's source.", "coefficient_curves(d)"));
 }
@@ -74,7 +101,9 @@ fn plan_view(flights: &[FlightValue]) -> PlanView {
 }
 
 fn side_view(flights: &[FlightValue]) -> SideView {
-    flights.iter().fold(SideView::new("Height along the flight"), |chart, f| chart.track(track_points(f, |p| (p.x, p.z))))
+    flights
+        .iter()
+        .fold(SideView::new("Height along the flight"), |chart, f| chart.track(track_points(f, |p| (p.x, p.z))))
 }
 
 type SampleValue = fn(&spinfoil_engine::FlightSample) -> f64;
@@ -112,10 +141,13 @@ fn cross_section(ctx: &NativeCallContext, d: &DiscValue) -> Fallible<ChartValue>
 
 fn mass_bars(discs: &[DiscValue]) -> MassBars {
     let quantities = vec!["I_z (spin)".to_string(), "I_x (transverse)".to_string()];
-    discs.iter().fold(MassBars::new("Moments of inertia", Axis::new("moment of inertia", "g·cm²"), quantities), |chart, d| {
-        let p = d.report.properties;
-        chart.group(d.design.name.clone(), vec![p.spin_inertia_kg_m2 * 1e7, p.transverse_inertia_kg_m2 * 1e7])
-    })
+    discs.iter().fold(
+        MassBars::new("Moments of inertia", Axis::new("moment of inertia", "g·cm²"), quantities),
+        |chart, d| {
+            let p = d.report.properties;
+            chart.group(d.design.name.clone(), vec![p.spin_inertia_kg_m2 * 1e7, p.transverse_inertia_kg_m2 * 1e7])
+        },
+    )
 }
 
 fn coefficient_curves(d: &DiscValue) -> CoefficientCurves {

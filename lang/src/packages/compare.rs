@@ -62,14 +62,22 @@ pub(crate) fn register_compare_mass(reg: &mut Registrar) {
 }
 
 /// The items of a script array, each of type `T` (named `what` in errors); at least one.
-pub(crate) fn items_of<T: rhai::Variant + Clone>(ctx: &NativeCallContext, items: &Array, what: &str) -> Fallible<Vec<T>> {
+pub(crate) fn items_of<T: rhai::Variant + Clone>(
+    ctx: &NativeCallContext,
+    items: &Array,
+    what: &str,
+) -> Fallible<Vec<T>> {
     if items.is_empty() {
         return Err(value_error(ctx, format!("give at least one {what} in the array, e.g. [a, b]")));
     }
     items
         .iter()
         .enumerate()
-        .map(|(i, item)| item.clone().try_cast::<T>().ok_or_else(|| value_error(ctx, format!("item {i} is a {}, not a {what}", crate::errors::friendly_type(item)))))
+        .map(|(i, item)| {
+            item.clone().try_cast::<T>().ok_or_else(|| {
+                value_error(ctx, format!("item {i} is a {}, not a {what}", crate::errors::friendly_type(item)))
+            })
+        })
         .collect()
 }
 

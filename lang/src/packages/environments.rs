@@ -4,7 +4,9 @@ use crate::help::{FnDoc, Registrar};
 use crate::options::{OptionSpec, OptionValues};
 use rhai::{Map, NativeCallContext};
 use serde::{Deserialize, Serialize};
-use spinfoil_engine::{isa_temperature_k, AirProperties, AirSpec, FlightConditions, Ground, GustSpec, SurfacePreset, Terrain, WindSpec};
+use spinfoil_engine::{
+    isa_temperature_k, AirProperties, AirSpec, FlightConditions, Ground, GustSpec, SurfacePreset, Terrain, WindSpec,
+};
 use std::sync::Arc;
 
 /// An environment as scripts hold it: the specs (as saved) and the air they give.
@@ -43,7 +45,10 @@ impl EnvironmentValue {
 
     /// The ground to play the landing out on, if the environment names one.
     pub fn ground(&self) -> Result<Option<Ground>, String> {
-        self.ground.as_deref().map(|name| SurfacePreset::from_name(name).map(Ground::level).map_err(|e| e.to_string())).transpose()
+        self.ground
+            .as_deref()
+            .map(|name| SurfacePreset::from_name(name).map(Ground::level).map_err(|e| e.to_string()))
+            .transpose()
     }
 
     /// Sea-level standard air (ISO 2533 at 0 m), no wind.
@@ -82,16 +87,43 @@ pub(crate) fn register(reg: &mut Registrar) {
         "Air from the International Standard Atmosphere at an altitude (or measured pressure and temperature), with humidity; wind with a logarithmic profile over a terrain preset, optionally seeded gusts. Without options: sea-level standard air, no wind.",
         "let day = environment(#{ altitude_m: 420, temperature_c: 18, humidity_pct: 60, wind_mps: 3, wind_from_deg: 250 });",
     ).with_options(ENVIRONMENT_OPTIONS));
-    reg.getter("Environment", "density_kg_m3", "air density, kg/m³", |e: &mut EnvironmentValue| e.air_properties().density_kg_m3);
-    reg.getter("Environment", "temperature_c", "air temperature, °C", |e: &mut EnvironmentValue| e.air_properties().temperature_k - 273.15);
-    reg.getter("Environment", "pressure_hpa", "static pressure, hPa", |e: &mut EnvironmentValue| e.air_properties().pressure_pa / 100.0);
-    reg.getter("Environment", "viscosity_pa_s", "dynamic viscosity, Pa·s", |e: &mut EnvironmentValue| e.air_properties().dynamic_viscosity_pa_s);
-    reg.getter("Environment", "wind_mps", "mean wind speed at the reference height, m/s", |e: &mut EnvironmentValue| e.wind.speed_mps);
-    reg.getter("Environment", "ground", "the landing surface, or nothing", |e: &mut EnvironmentValue| e.ground.clone().map_or(rhai::Dynamic::UNIT, rhai::Dynamic::from));
-    reg.getter("Environment", "wind_from_deg", "direction the wind comes from, ° (0 headwind, 180 tailwind)", |e: &mut EnvironmentValue| e.wind.from_deg);
-    reg.engine.register_fn("to_string", |e: &mut EnvironmentValue| {
+    reg.getter("Environment", "density_kg_m3", "air density, kg/m³", |e: &mut EnvironmentValue| {
+        e.air_properties().density_kg_m3
+    });
+    reg.getter("Environment", "temperature_c", "air temperature, °C", |e: &mut EnvironmentValue| {
+        e.air_properties().temperature_k - 273.15
+    });
+    reg.getter("Environment", "pressure_hpa", "static pressure, hPa", |e: &mut EnvironmentValue| {
+        e.air_properties().pressure_pa / 100.0
+    });
+    reg.getter("Environment", "viscosity_pa_s", "dynamic viscosity, Pa·s", |e: &mut EnvironmentValue| {
+        e.air_properties().dynamic_viscosity_pa_s
+    });
+    reg.getter(
+        "Environment",
+        "wind_mps",
+        "mean wind speed at the reference height, m/s",
+        |e: &mut EnvironmentValue| e.wind.speed_mps,
+    );
+    reg.getter("Environment", "ground", "the landing surface, or nothing", |e: &mut EnvironmentValue| {
+        e.ground.clone().map_or(rhai::Dynamic::UNIT, rhai::Dynamic::from)
+    });
+    reg.getter(
+        "Environment",
+        "wind_from_deg",
+        "direction the wind comes from, ° (0 headwind, 180 tailwind)",
+        |e: &mut EnvironmentValue| e.wind.from_deg,
+    );
+    reg.text(|e: &mut EnvironmentValue| {
         let p = e.air_properties();
-        format!("environment: air {:.4} kg/m³ at {:.1} °C, {:.1} hPa; wind {:.1} m/s from {:.0}°", p.density_kg_m3, p.temperature_k - 273.15, p.pressure_pa / 100.0, e.wind.speed_mps, e.wind.from_deg)
+        format!(
+            "environment: air {:.4} kg/m³ at {:.1} °C, {:.1} hPa; wind {:.1} m/s from {:.0}°",
+            p.density_kg_m3,
+            p.temperature_k - 273.15,
+            p.pressure_pa / 100.0,
+            e.wind.speed_mps,
+            e.wind.from_deg
+        )
     });
 }
 

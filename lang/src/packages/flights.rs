@@ -25,16 +25,35 @@ pub(crate) struct FlightValue {
 const RPM_PER_RAD_S: f64 = 60.0 / std::f64::consts::TAU;
 
 /// Flies `disc` with `throw` in `environment` (the computation behind the script's `fly`).
-pub(crate) fn fly_disc(disc: &DiscValue, throw: &ThrowValue, environment: &EnvironmentValue) -> Result<FlightValue, String> {
+pub(crate) fn fly_disc(
+    disc: &DiscValue,
+    throw: &ThrowValue,
+    environment: &EnvironmentValue,
+) -> Result<FlightValue, String> {
     let release = throw.release_for(disc)?;
     let conditions = environment.conditions()?;
     let label = disc.design.name.clone();
     let settings = FlightSettings::default();
     if let Some(ground) = environment.ground()? {
-        let to_rest = fly_to_rest(&disc.body(), &disc.aero, &release, &conditions, &settings, &ground, &GroundSettings::default()).map_err(|e| e.to_string())?;
-        return Ok(FlightValue { label, release, flight: Arc::new(to_rest.flight), ground: Some(Arc::new(to_rest.ground)) });
+        let to_rest = fly_to_rest(
+            &disc.body(),
+            &disc.aero,
+            &release,
+            &conditions,
+            &settings,
+            &ground,
+            &GroundSettings::default(),
+        )
+        .map_err(|e| e.to_string())?;
+        return Ok(FlightValue {
+            label,
+            release,
+            flight: Arc::new(to_rest.flight),
+            ground: Some(Arc::new(to_rest.ground)),
+        });
     }
-    let flight = spinfoil_engine::fly(&disc.body(), &disc.aero, &release, &conditions, &settings).map_err(|e| e.to_string())?;
+    let flight =
+        spinfoil_engine::fly(&disc.body(), &disc.aero, &release, &conditions, &settings).map_err(|e| e.to_string())?;
     Ok(FlightValue { label, release, flight: Arc::new(flight), ground: None })
 }
 
@@ -43,7 +62,9 @@ pub(crate) fn register(reg: &mut Registrar) {
     reg.section("flights", "flying a disc from its release to its first ground contact; metrics and the trajectory");
     reg.engine.register_type_with_name::<FlightValue>("Flight");
     reg.engine.register_fn("fly", fly);
-    reg.engine.register_fn("fly", |ctx: NativeCallContext, d: DiscValue, t: ThrowValue| fly(ctx, d, t, EnvironmentValue::standard()));
+    reg.engine.register_fn("fly", |ctx: NativeCallContext, d: DiscValue, t: ThrowValue| {
+        fly(ctx, d, t, EnvironmentValue::standard())
+    });
     reg.doc(FnDoc::new(
         "fly(disc: Disc, throw: Throw, environment: Environment) -> Flight",
         "Integrates the 6-degree-of-freedom flight from release to the first ground contact of the rim. The environment may be left out (sea-level standard air, no wind). Predictions are estimates: keep clear of the throwing lane, check landing zones for people and property, and follow local rules and the course designer's safety guidance.",
@@ -56,12 +77,19 @@ pub(crate) fn register(reg: &mut Registrar) {
         "fly(d, t).trajectory().to_csv()",
     ));
     reg.engine.register_fn("to_csv", |f: &mut FlightValue| trajectory_table(f).to_csv());
-    reg.doc(FnDoc::new("to_csv(flight: Flight) -> string", "The trajectory as CSV text (headers carry units).", "let text = fly(d, t).to_csv();"));
+    reg.doc(FnDoc::new(
+        "to_csv(flight: Flight) -> string",
+        "The trajectory as CSV text (headers carry units).",
+        "let text = fly(d, t).to_csv();",
+    ));
     register_metric_fields(reg);
     super::compare::register_compare_flights(reg);
-    reg.engine.register_fn("to_string", |f: &mut FlightValue| {
+    reg.text(|f: &mut FlightValue| {
         let m = f.flight.metrics;
-        format!("flight of \"{}\": carry {:.1} m, apex {:.1} m, {:.2} s aloft, turn {:.1} m, fade {:.1} m", f.label, m.carry_m, m.apex_m, m.time_aloft_s, m.turn_m, m.fade_m)
+        format!(
+            "flight of \"{}\": carry {:.1} m, apex {:.1} m, {:.2} s aloft, turn {:.1} m, fade {:.1} m",
+            f.label, m.carry_m, m.apex_m, m.time_aloft_s, m.turn_m, m.fade_m
+        )
     });
 }
 
@@ -71,22 +99,36 @@ type Metric = (&'static str, &'static str, fn(&FlightValue) -> f64);
 pub(crate) const METRICS: &[Metric] = &[
     ("carry_m", "horizontal distance from release to landing, m", |f| m(f).carry_m),
     ("landing_downrange_m", "distance along the release heading to the landing point, m", |f| m(f).landing_downrange_m),
-    ("landing_lateral_m", "offset of the landing point from the release heading line, m (positive toward the fade side)", |f| m(f).landing_lateral_m),
+    (
+        "landing_lateral_m",
+        "offset of the landing point from the release heading line, m (positive toward the fade side)",
+        |f| m(f).landing_lateral_m,
+    ),
     ("apex_m", "greatest height of the centre of mass, m", |f| m(f).apex_m),
     ("apex_time_s", "time of the apex, s", |f| m(f).apex_time_s),
     ("time_aloft_s", "time from release to landing, s", |f| m(f).time_aloft_s),
     ("turn_m", "largest excursion to the turn side of the release line, m", |f| m(f).turn_m),
     ("fade_m", "lateral change from the point of largest turn to landing, toward the fade side, m", |f| m(f).fade_m),
-    ("heading_change_deg", "ground-track heading change from release to landing, ° (positive toward the fade side)", |f| m(f).heading_change_rad.to_degrees()),
+    (
+        "heading_change_deg",
+        "ground-track heading change from release to landing, ° (positive toward the fade side)",
+        |f| m(f).heading_change_rad.to_degrees(),
+    ),
     ("release_speed_mps", "release speed, m/s", |f| f.release.speed_mps),
     ("release_spin_rpm", "release spin, rpm", |f| m(f).release_spin_rad_s * RPM_PER_RAD_S),
     ("landing_speed_mps", "speed at landing, m/s", |f| m(f).landing_speed_mps),
     ("landing_angle_deg", "descent angle at landing, ° below horizontal", |f| m(f).landing_angle_rad.to_degrees()),
     ("landing_spin_rpm", "spin at landing, rpm", |f| m(f).landing_spin_rad_s * RPM_PER_RAD_S),
     ("spin_kept_pct", "share of the release spin kept at landing, %", |f| m(f).spin_kept_fraction * 100.0),
-    ("release_angular_momentum_g_m2_s", "angular momentum at release, g·m²/s", |f| m(f).release_angular_momentum_kg_m2_s * 1000.0),
-    ("landing_angular_momentum_g_m2_s", "angular momentum at landing, g·m²/s", |f| m(f).landing_angular_momentum_kg_m2_s * 1000.0),
-    ("max_axis_rate_deg_s", "largest rate of the disc's axis (roll and pitch motion), °/s", |f| m(f).max_axis_rate_rad_s.to_degrees()),
+    ("release_angular_momentum_g_m2_s", "angular momentum at release, g·m²/s", |f| {
+        m(f).release_angular_momentum_kg_m2_s * 1000.0
+    }),
+    ("landing_angular_momentum_g_m2_s", "angular momentum at landing, g·m²/s", |f| {
+        m(f).landing_angular_momentum_kg_m2_s * 1000.0
+    }),
+    ("max_axis_rate_deg_s", "largest rate of the disc's axis (roll and pitch motion), °/s", |f| {
+        m(f).max_axis_rate_rad_s.to_degrees()
+    }),
 ];
 
 fn m(f: &FlightValue) -> &FlightMetrics {
@@ -100,10 +142,17 @@ fn register_metric_fields(reg: &mut Registrar) {
     }
     reg.getter("Flight", "name", "the disc's name", |f: &mut FlightValue| f.label.clone());
     register_ground_fields(reg);
-    reg.getter("Flight", "landed", "true when the flight ended by ground contact", |f: &mut FlightValue| f.flight.landed);
+    reg.getter("Flight", "landed", "true when the flight ended by ground contact", |f: &mut FlightValue| {
+        f.flight.landed
+    });
 }
 
-fn fly(ctx: NativeCallContext, disc: DiscValue, throw: ThrowValue, environment: EnvironmentValue) -> Fallible<FlightValue> {
+fn fly(
+    ctx: NativeCallContext,
+    disc: DiscValue,
+    throw: ThrowValue,
+    environment: EnvironmentValue,
+) -> Fallible<FlightValue> {
     fly_disc(&disc, &throw, &environment).map_err(|e| engine_error(&ctx, e))
 }
 
@@ -137,13 +186,43 @@ pub(crate) fn trajectory_table(f: &FlightValue) -> Table {
 }
 
 fn register_ground_fields(reg: &mut Registrar) {
-    let ground = |f: &FlightValue, get: fn(&GroundPlay) -> f64| f.ground.as_ref().map_or(rhai::Dynamic::UNIT, |g| rhai::Dynamic::from_float(get(g)));
-    reg.getter("Flight", "ground_play_m", "distance from landing to rest, m (nothing without a ground)", move |f: &mut FlightValue| ground(f, |g| g.ground_play_m));
-    reg.getter("Flight", "time_to_rest_s", "time from landing to rest, s (nothing without a ground)", move |f: &mut FlightValue| ground(f, |g| g.time_to_rest_s));
-    reg.getter("Flight", "rest_downrange_m", "downrange x of the rest point, m (nothing without a ground)", move |f: &mut FlightValue| ground(f, |g| g.rest_position_m.x));
-    reg.getter("Flight", "rest_lateral_m", "lateral y of the rest point, m, left positive (nothing without a ground)", move |f: &mut FlightValue| ground(f, |g| g.rest_position_m.y));
-    reg.getter("Flight", "skips", "times the disc left the ground again after landing (nothing without a ground)", move |f: &mut FlightValue| ground(f, |g| g.skips as f64));
-    reg.getter("Flight", "ground_ending", "how the ground play ended (\"stopped\", \"slid\", ...; nothing without a ground)", |f: &mut FlightValue| {
-        f.ground.as_ref().map_or(rhai::Dynamic::UNIT, |g| rhai::Dynamic::from(g.describe()))
-    });
+    let ground = |f: &FlightValue, get: fn(&GroundPlay) -> f64| {
+        f.ground.as_ref().map_or(rhai::Dynamic::UNIT, |g| rhai::Dynamic::from_float(get(g)))
+    };
+    reg.getter(
+        "Flight",
+        "ground_play_m",
+        "distance from landing to rest, m (nothing without a ground)",
+        move |f: &mut FlightValue| ground(f, |g| g.ground_play_m),
+    );
+    reg.getter(
+        "Flight",
+        "time_to_rest_s",
+        "time from landing to rest, s (nothing without a ground)",
+        move |f: &mut FlightValue| ground(f, |g| g.time_to_rest_s),
+    );
+    reg.getter(
+        "Flight",
+        "rest_downrange_m",
+        "downrange x of the rest point, m (nothing without a ground)",
+        move |f: &mut FlightValue| ground(f, |g| g.rest_position_m.x),
+    );
+    reg.getter(
+        "Flight",
+        "rest_lateral_m",
+        "lateral y of the rest point, m, left positive (nothing without a ground)",
+        move |f: &mut FlightValue| ground(f, |g| g.rest_position_m.y),
+    );
+    reg.getter(
+        "Flight",
+        "skips",
+        "times the disc left the ground again after landing (nothing without a ground)",
+        move |f: &mut FlightValue| ground(f, |g| g.skips as f64),
+    );
+    reg.getter(
+        "Flight",
+        "ground_ending",
+        "how the ground play ended (\"stopped\", \"slid\", ...; nothing without a ground)",
+        |f: &mut FlightValue| f.ground.as_ref().map_or(rhai::Dynamic::UNIT, |g| rhai::Dynamic::from(g.describe())),
+    );
 }

@@ -17,7 +17,11 @@ pub(crate) fn register(reg: &mut Registrar) {
     reg.section("layups", "how materials fill the cross-section");
     reg.engine.register_type_with_name::<Layup>("Layup");
     reg.engine.register_fn("single_layup", |m: Material| Layup::single(m));
-    reg.doc(FnDoc::new("single_layup(material: Material) -> Layup", "One material throughout the disc.", "let l = single_layup(material(\"base blend\", 0.95));"));
+    reg.doc(FnDoc::new(
+        "single_layup(material: Material) -> Layup",
+        "One material throughout the disc.",
+        "let l = single_layup(material(\"base blend\", 0.95));",
+    ));
     reg.engine.register_fn("rim_layup", rim_layup);
     reg.doc(
         FnDoc::new(
@@ -40,7 +44,7 @@ pub(crate) fn register(reg: &mut Registrar) {
     reg.getter("Layup", "materials", "the materials, in order", |l: &mut Layup| -> Array {
         l.materials().into_iter().map(|m| Dynamic::from(m.clone())).collect()
     });
-    reg.engine.register_fn("to_string", |l: &mut Layup| {
+    reg.text(|l: &mut Layup| {
         let names: Vec<String> = l.materials().iter().map(|m| m.name.clone()).collect();
         format!("{} layup of {}", layup_kind(l), names.join(", "))
     });

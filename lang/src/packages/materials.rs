@@ -16,7 +16,7 @@ pub(crate) fn register(reg: &mut Registrar) {
     ));
     reg.getter("Material", "name", "the material's name", |m: &mut Material| m.name.clone());
     reg.getter("Material", "density_g_cm3", "density, g/cm³", |m: &mut Material| m.density_g_cm3());
-    reg.engine.register_fn("to_string", |m: &mut Material| format!("material \"{}\" ({:.3} g/cm³)", m.name, m.density_g_cm3()));
+    reg.text(|m: &mut Material| format!("material \"{}\" ({:.3} g/cm³)", m.name, m.density_g_cm3()));
 }
 
 fn material(ctx: NativeCallContext, name: &str, density_g_cm3: Dynamic) -> Fallible<Material> {

@@ -3,7 +3,9 @@ use super::args::{design_error, options, Fallible};
 use crate::help::{FnDoc, Registrar};
 use crate::options::OptionSpec;
 use rhai::{Map, NativeCallContext};
-use spinfoil_engine::{Dimension, DiscFamily, GeometryError, Outline, OutlineSource, ParametricOutline, RzPoint, SamplingSettings};
+use spinfoil_engine::{
+    Dimension, DiscFamily, GeometryError, Outline, OutlineSource, ParametricOutline, RzPoint, SamplingSettings,
+};
 
 /// An outline as scripts hold it: how it was described and the polygon it builds to.
 #[derive(Debug, Clone, PartialEq)]
@@ -41,7 +43,11 @@ pub(crate) const OUTLINE_OPTIONS: &[OptionSpec] = &[
 pub(crate) fn register(reg: &mut Registrar) {
     reg.section("outlines", "cross-sections of a disc (parametric families of our own design)");
     reg.engine.register_type_with_name::<OutlineValue>("Outline");
-    for (name, family) in [("putter_outline", DiscFamily::Putter), ("midrange_outline", DiscFamily::Midrange), ("driver_outline", DiscFamily::Driver)] {
+    for (name, family) in [
+        ("putter_outline", DiscFamily::Putter),
+        ("midrange_outline", DiscFamily::Midrange),
+        ("driver_outline", DiscFamily::Driver),
+    ] {
         reg.engine.register_fn(name, move |ctx: NativeCallContext, opts: Map| outline(&ctx, family, &opts));
         reg.engine.register_fn(name, move |ctx: NativeCallContext| outline(&ctx, family, &Map::new()));
         let doc = format!("{name}(options: map) -> Outline");
@@ -49,7 +55,14 @@ pub(crate) fn register(reg: &mut Registrar) {
             "A parametric {} cross-section; dimensions not given take the family's defaults. Each dimension is checked against the others (e.g. the rim must leave room for the flight plate).",
             family_name(family)
         );
-        reg.doc(FnDoc::new(&doc, &summary, &format!("let o = {name}(#{{ diameter_cm: 21.1, rim_width_cm: 2.0, plate_mm: 2.0 }});")).with_options(OUTLINE_OPTIONS));
+        reg.doc(
+            FnDoc::new(
+                &doc,
+                &summary,
+                &format!("let o = {name}(#{{ diameter_cm: 21.1, rim_width_cm: 2.0, plate_mm: 2.0 }});"),
+            )
+            .with_options(OUTLINE_OPTIONS),
+        );
     }
     reg.engine.register_fn("outline_points", outline_points);
     reg.doc(FnDoc::new(
@@ -66,7 +79,12 @@ fn outline_points(ctx: NativeCallContext, points: rhai::Array) -> Fallible<Outli
         let pair = point.read_lock::<rhai::Array>().map(|a| a.iter().map(number_of).collect::<Vec<_>>());
         match pair.as_deref() {
             Some([Some(r), Some(z)]) => rz.push(RzPoint::new(r / 100.0, z / 100.0)),
-            _ => return Err(super::args::value_error(&ctx, format!("point {i} must be [r_cm, z_cm] (two numbers), got {point}"))),
+            _ => {
+                return Err(super::args::value_error(
+                    &ctx,
+                    format!("point {i} must be [r_cm, z_cm] (two numbers), got {point}"),
+                ))
+            }
         }
     }
     let built = Outline::from_points(rz).map_err(|e| design_error(&ctx, e))?;
@@ -78,15 +96,29 @@ fn number_of(value: &rhai::Dynamic) -> Option<f64> {
 }
 
 fn register_fields(reg: &mut Registrar) {
-    reg.getter("Outline", "family", "\"putter\", \"midrange\", \"driver\" or \"points\"", |o: &mut OutlineValue| source_family(&o.source));
+    reg.getter("Outline", "family", "\"putter\", \"midrange\", \"driver\" or \"points\"", |o: &mut OutlineValue| {
+        source_family(&o.source)
+    });
     reg.getter("Outline", "diameter_cm", "outside diameter, cm", |o: &mut OutlineValue| o.built.diameter_m() * 100.0);
     reg.getter("Outline", "rim_width_cm", "rim width, cm", |o: &mut OutlineValue| o.built.rim_width_m() * 100.0);
     reg.getter("Outline", "rim_depth_cm", "inner rim depth, cm", |o: &mut OutlineValue| o.built.rim_depth_m() * 100.0);
-    reg.getter("Outline", "rim_thickness_cm", "nose thickness, cm", |o: &mut OutlineValue| o.built.rim_thickness_m() * 100.0);
-    reg.getter("Outline", "plate_mm", "flight-plate thickness, mm", |o: &mut OutlineValue| o.built.plate_thickness_m() * 1000.0);
-    reg.getter("Outline", "area_cm2", "area of the cross-section, cm²", |o: &mut OutlineValue| o.built.area_m2() * 1e4);
-    reg.engine.register_fn("to_string", |o: &mut OutlineValue| {
-        format!("{} outline, {:.1} cm across, rim {:.2} cm wide and {:.2} cm deep", source_family(&o.source), o.built.diameter_m() * 100.0, o.built.rim_width_m() * 100.0, o.built.rim_depth_m() * 100.0)
+    reg.getter("Outline", "rim_thickness_cm", "nose thickness, cm", |o: &mut OutlineValue| {
+        o.built.rim_thickness_m() * 100.0
+    });
+    reg.getter("Outline", "plate_mm", "flight-plate thickness, mm", |o: &mut OutlineValue| {
+        o.built.plate_thickness_m() * 1000.0
+    });
+    reg.getter("Outline", "area_cm2", "area of the cross-section, cm²", |o: &mut OutlineValue| {
+        o.built.area_m2() * 1e4
+    });
+    reg.text(|o: &mut OutlineValue| {
+        format!(
+            "{} outline, {:.1} cm across, rim {:.2} cm wide and {:.2} cm deep",
+            source_family(&o.source),
+            o.built.diameter_m() * 100.0,
+            o.built.rim_width_m() * 100.0,
+            o.built.rim_depth_m() * 100.0
+        )
     });
 }
 
@@ -99,13 +131,19 @@ fn outline(ctx: &NativeCallContext, family: DiscFamily, opts: &Map) -> Fallible<
         }
     }
     let given: Vec<Dimension> = KEYS.iter().filter(|(key, ..)| values.has(key)).map(|(_, d, _)| *d).collect();
-    let built = parametric.build(&SamplingSettings::default()).map_err(|e| outline_error(ctx, &parametric, &given, e))?;
+    let built =
+        parametric.build(&SamplingSettings::default()).map_err(|e| outline_error(ctx, &parametric, &given, e))?;
     Ok(OutlineValue { source: OutlineSource::Parametric(parametric), built })
 }
 
 /// Engine dimension errors restated in the script's keys and units, blaming a dimension the
 /// script gave when one of those is out of its range.
-fn outline_error(ctx: &NativeCallContext, outline: &ParametricOutline, given: &[Dimension], err: GeometryError) -> Box<rhai::EvalAltResult> {
+fn outline_error(
+    ctx: &NativeCallContext,
+    outline: &ParametricOutline,
+    given: &[Dimension],
+    err: GeometryError,
+) -> Box<rhai::EvalAltResult> {
     let GeometryError::DimensionOutOfRange { dimension, .. } = &err else { return design_error(ctx, err) };
     let out_of_range = |d: &Dimension| {
         let (lo, hi) = outline.allowed_range_m(*d);
@@ -116,7 +154,12 @@ fn outline_error(ctx: &NativeCallContext, outline: &ParametricOutline, given: &[
     let (lo, hi) = outline.allowed_range_m(*blamed);
     let short = |x: f64| crate::options::fmt_short(x / metres, 4);
     let why = if lo > hi { "; no value fits: change the other dimensions first" } else { "" };
-    let message = format!("{key} = {} is outside its allowed range {} to {} given the other dimensions{why}", short(outline.get(*blamed)), short(lo), short(hi));
+    let message = format!(
+        "{key} = {} is outside its allowed range {} to {} given the other dimensions{why}",
+        short(outline.get(*blamed)),
+        short(lo),
+        short(hi)
+    );
     design_error(ctx, message)
 }
 

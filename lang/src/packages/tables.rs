@@ -9,9 +9,17 @@ pub(crate) fn register(reg: &mut Registrar) {
     reg.section("tables", "results as data: exports and columns");
     reg.engine.register_type_with_name::<Table>("Table");
     reg.engine.register_fn("to_csv", |t: &mut Table| t.to_csv());
-    reg.doc(FnDoc::new("to_csv(table: Table) -> string", "The table as CSV text; headers carry units (`carry_m`), numbers keep full precision.", "compare_mass([a, b]).to_csv()"));
+    reg.doc(FnDoc::new(
+        "to_csv(table: Table) -> string",
+        "The table as CSV text; headers carry units (`carry_m`), numbers keep full precision.",
+        "compare_mass([a, b]).to_csv()",
+    ));
     reg.engine.register_fn("to_json", |t: &mut Table| t.to_json());
-    reg.doc(FnDoc::new("to_json(table: Table) -> string", "The table as JSON text (title, columns with units, rows, notes).", "compare_mass([a, b]).to_json()"));
+    reg.doc(FnDoc::new(
+        "to_json(table: Table) -> string",
+        "The table as JSON text (title, columns with units, rows, notes).",
+        "compare_mass([a, b]).to_json()",
+    ));
     reg.engine.register_fn("column", column);
     reg.doc(FnDoc::new(
         "column(table: Table, name: string) -> array",
@@ -23,7 +31,7 @@ pub(crate) fn register(reg: &mut Registrar) {
     reg.getter("Table", "notes", "notes under the table (warnings, sources, cautions)", |t: &mut Table| -> Array {
         t.notes.iter().cloned().map(Dynamic::from).collect()
     });
-    reg.engine.register_fn("to_string", |t: &mut Table| t.to_text());
+    reg.text(|t: &mut Table| t.to_text());
 }
 
 fn column(ctx: NativeCallContext, table: &mut Table, name: &str) -> Fallible<Array> {

@@ -24,9 +24,9 @@ impl ThrowValue {
     pub fn release_for(&self, disc: &DiscValue) -> Result<ReleaseState, String> {
         match self {
             ThrowValue::Release(state) => Ok(*state),
-            ThrowValue::Effort(effort) => {
-                effort.release(&disc.report.properties, disc.report.outline.diameter_m() / 2.0).map_err(|e| e.to_string())
-            }
+            ThrowValue::Effort(effort) => effort
+                .release(&disc.report.properties, disc.report.outline.diameter_m() / 2.0)
+                .map_err(|e| e.to_string()),
         }
     }
 
@@ -44,9 +44,24 @@ const POSE_OPTIONS: [OptionSpec; 8] = [
     OptionSpec::choice("style", &["backhand", "forehand"], "throwing style (default backhand)"),
     OptionSpec::choice("hand", &["right", "left"], "throwing hand (default right)"),
     OptionSpec::optional("launch_deg", -90.0, 90.0, "angle of the velocity above horizontal (default 0)"),
-    OptionSpec::optional("nose_deg", -60.0, 60.0, "angle of the disc plane above the velocity, nose up positive (default 0)"),
-    OptionSpec::optional("hyzer_deg", -90.0, 90.0, "roll about the velocity, hyzer positive, anhyzer negative (default 0)"),
-    OptionSpec::optional("heading_deg", -180.0, 180.0, "direction of the velocity from downrange, to the left positive (default 0)"),
+    OptionSpec::optional(
+        "nose_deg",
+        -60.0,
+        60.0,
+        "angle of the disc plane above the velocity, nose up positive (default 0)",
+    ),
+    OptionSpec::optional(
+        "hyzer_deg",
+        -90.0,
+        90.0,
+        "roll about the velocity, hyzer positive, anhyzer negative (default 0)",
+    ),
+    OptionSpec::optional(
+        "heading_deg",
+        -180.0,
+        180.0,
+        "direction of the velocity from downrange, to the left positive (default 0)",
+    ),
     OptionSpec::optional("height_m", 0.0, 3.0, "release height of the centre of mass (default 1)"),
     OptionSpec::optional("wobble_rad_s", 0.0, 50.0, "off-axis angular velocity at release (default 0)"),
 ];
@@ -59,11 +74,26 @@ const RELEASE_ONLY: [OptionSpec; 4] = [
 ];
 
 const EFFORT_ONLY: [OptionSpec; 5] = [
-    OptionSpec::number("work_j", 0.0, 1000.0, "work the arm puts into the disc's travel (or all work, with rim_speed_ratio)"),
+    OptionSpec::number(
+        "work_j",
+        0.0,
+        1000.0,
+        "work the arm puts into the disc's travel (or all work, with rim_speed_ratio)",
+    ),
     OptionSpec::optional("torque_nm", 0.0, 30.0, "wrist torque that spins the disc (with wrist_deg)"),
     OptionSpec::optional("wrist_deg", 0.0, 360.0, "angle the wrist turns the disc through while applying torque_nm"),
-    OptionSpec::optional("rim_speed_ratio", 0.0, 2.0, "rim speed over travel speed ωR/V, instead of torque_nm and wrist_deg"),
-    OptionSpec::optional("arm_mass_kg", 0.0, 5.0, "arm mass moving with the disc (default 0.4 with torque_nm, 0 with rim_speed_ratio)"),
+    OptionSpec::optional(
+        "rim_speed_ratio",
+        0.0,
+        2.0,
+        "rim speed over travel speed ωR/V, instead of torque_nm and wrist_deg",
+    ),
+    OptionSpec::optional(
+        "arm_mass_kg",
+        0.0,
+        5.0,
+        "arm mass moving with the disc (default 0.4 with torque_nm, 0 with rim_speed_ratio)",
+    ),
 ];
 
 fn release_options() -> Vec<OptionSpec> {
@@ -109,24 +139,47 @@ fn register_fields(reg: &mut Registrar) {
         ThrowValue::Release(_) => "release".to_string(),
         ThrowValue::Effort(_) => "effort".to_string(),
     });
-    reg.getter("Throw", "speed_mps", "release speed, m/s (nothing for an effort: see release_for)", move |t: &mut ThrowValue| or_unit(release(t).map(|s| s.speed_mps)));
-    reg.getter("Throw", "spin_rpm", "spin, rpm (nothing for an effort)", move |t: &mut ThrowValue| or_unit(release(t).map(|s| s.spin_rad_s * RPM_PER_RAD_S)));
+    reg.getter(
+        "Throw",
+        "speed_mps",
+        "release speed, m/s (nothing for an effort: see release_for)",
+        move |t: &mut ThrowValue| or_unit(release(t).map(|s| s.speed_mps)),
+    );
+    reg.getter("Throw", "spin_rpm", "spin, rpm (nothing for an effort)", move |t: &mut ThrowValue| {
+        or_unit(release(t).map(|s| s.spin_rad_s * RPM_PER_RAD_S))
+    });
     reg.getter("Throw", "launch_deg", "launch angle, °", |t: &mut ThrowValue| t.pose().launch_rad.to_degrees());
     reg.getter("Throw", "nose_deg", "nose angle, °", |t: &mut ThrowValue| t.pose().nose_rad.to_degrees());
-    reg.getter("Throw", "hyzer_deg", "roll angle, ° (hyzer positive, anhyzer negative)", |t: &mut ThrowValue| t.pose().roll_rad.to_degrees());
-    reg.getter("Throw", "heading_deg", "heading, ° (left positive)", |t: &mut ThrowValue| t.pose().heading_rad.to_degrees());
+    reg.getter("Throw", "hyzer_deg", "roll angle, ° (hyzer positive, anhyzer negative)", |t: &mut ThrowValue| {
+        t.pose().roll_rad.to_degrees()
+    });
+    reg.getter("Throw", "heading_deg", "heading, ° (left positive)", |t: &mut ThrowValue| {
+        t.pose().heading_rad.to_degrees()
+    });
     reg.getter("Throw", "height_m", "release height, m", |t: &mut ThrowValue| t.pose().height_m);
-    reg.getter("Throw", "style", "\"backhand\" or \"forehand\"", |t: &mut ThrowValue| style_name(t.pose().style).to_string());
+    reg.getter("Throw", "style", "\"backhand\" or \"forehand\"", |t: &mut ThrowValue| {
+        style_name(t.pose().style).to_string()
+    });
     reg.getter("Throw", "hand", "\"right\" or \"left\"", |t: &mut ThrowValue| hand_name(t.pose().hand).to_string());
-    reg.engine.register_fn("to_string", |t: &mut ThrowValue| describe(t));
+    reg.text(|t: &mut ThrowValue| describe(t));
 }
 
 fn describe(t: &ThrowValue) -> String {
     let pose = t.pose();
     let how = format!("{} {}", hand_name(pose.hand), style_name(pose.style));
     match t {
-        ThrowValue::Release(s) => format!("{how} release: {:.1} m/s, {:.0} rpm, launch {:.1}°, hyzer {:.1}°", s.speed_mps, s.spin_rad_s * RPM_PER_RAD_S, pose.launch_rad.to_degrees(), pose.roll_rad.to_degrees()),
-        ThrowValue::Effort(_) => format!("{how} effort, launch {:.1}°, hyzer {:.1}°", pose.launch_rad.to_degrees(), pose.roll_rad.to_degrees()),
+        ThrowValue::Release(s) => format!(
+            "{how} release: {:.1} m/s, {:.0} rpm, launch {:.1}°, hyzer {:.1}°",
+            s.speed_mps,
+            s.spin_rad_s * RPM_PER_RAD_S,
+            pose.launch_rad.to_degrees(),
+            pose.roll_rad.to_degrees()
+        ),
+        ThrowValue::Effort(_) => format!(
+            "{how} effort, launch {:.1}°, hyzer {:.1}°",
+            pose.launch_rad.to_degrees(),
+            pose.roll_rad.to_degrees()
+        ),
     }
 }
 
@@ -177,7 +230,10 @@ fn effort(ctx: NativeCallContext, opts: Map) -> Fallible<ThrowValue> {
     let v = options(&ctx, &opts, &effort_options())?;
     let work_j = v.number_or("work_j", 0.0);
     let effort = match (v.number("rim_speed_ratio"), v.number("torque_nm"), v.number("wrist_deg")) {
-        (Some(k), None, None) => Effort::Coupled(CoupledEffort { arm_mass_kg: v.number_or("arm_mass_kg", 0.0), ..CoupledEffort::new(work_j, k) }),
+        (Some(k), None, None) => Effort::Coupled(CoupledEffort {
+            arm_mass_kg: v.number_or("arm_mass_kg", 0.0),
+            ..CoupledEffort::new(work_j, k)
+        }),
         (None, Some(torque), Some(wrist)) => {
             let base = IndependentEffort::new(work_j, torque, wrist.to_radians());
             Effort::Independent(IndependentEffort { arm_mass_kg: v.number_or("arm_mass_kg", base.arm_mass_kg), ..base })

@@ -32,7 +32,9 @@ impl Session {
         }
         match self.engine.compile(code) {
             Ok(_) => Completeness::Complete,
-            Err(e) if matches!(e.err_type(), ParseErrorType::UnexpectedEOF) => Completeness::Incomplete { indent: String::new() },
+            Err(e) if matches!(e.err_type(), ParseErrorType::UnexpectedEOF) => {
+                Completeness::Incomplete { indent: String::new() }
+            }
             Err(_) => Completeness::Invalid,
         }
     }

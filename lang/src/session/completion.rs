@@ -13,8 +13,8 @@ pub struct Completions {
 }
 
 const KEYWORDS: &[&str] = &[
-    "let", "const", "fn", "if", "else", "for", "in", "while", "loop", "do", "until", "break", "continue",
-    "return", "throw", "try", "catch", "switch", "true", "false", "this", "print", "debug",
+    "let", "const", "fn", "if", "else", "for", "in", "while", "loop", "do", "until", "break", "continue", "return",
+    "throw", "try", "catch", "switch", "true", "false", "this", "print", "debug",
 ];
 
 impl Session {
@@ -28,11 +28,8 @@ impl Session {
         let end = (cursor..chars.len()).take_while(|&k| is_ident(chars[k])).last().map_or(cursor, |k| k + 1);
         let prefix: String = chars[start..cursor].iter().collect();
         let before: String = chars[..start].iter().collect();
-        let mut matches: Vec<String> = self
-            .candidates(&before)
-            .into_iter()
-            .filter(|c| c.starts_with(&prefix))
-            .collect();
+        let mut matches: Vec<String> =
+            self.candidates(&before).into_iter().filter(|c| c.starts_with(&prefix)).collect();
         matches.sort();
         matches.dedup();
         Completions { matches, cursor_start: start, cursor_end: end }
@@ -73,8 +70,16 @@ impl Session {
         let chars: Vec<char> = receiver.chars().collect();
         let name = super::scan::identifier_before(&chars, chars.len()).unwrap_or_default();
         let type_name = self.variables().into_iter().find(|(n, _)| *n == name).map(|(_, t)| t);
-        let fields = self.docs.fields.iter().filter(|f| type_name.as_ref().map_or(true, |t| *t == f.type_name)).map(|f| f.field.clone());
-        let methods = self.docs.functions.iter().filter(|d| type_name.as_ref().is_some_and(|t| first_parameter_type(&d.signature).contains(t.as_str())));
+        let fields = self
+            .docs
+            .fields
+            .iter()
+            .filter(|f| type_name.as_ref().map_or(true, |t| *t == f.type_name))
+            .map(|f| f.field.clone());
+        let methods =
+            self.docs.functions.iter().filter(|d| {
+                type_name.as_ref().is_some_and(|t| first_parameter_type(&d.signature).contains(t.as_str()))
+            });
         fields.chain(methods.map(|d| d.name.clone())).collect()
     }
 }

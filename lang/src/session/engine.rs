@@ -12,7 +12,11 @@ use std::sync::{Arc, OnceLock};
 /// (core language, arithmetic, logic, math, strings, arrays, maps, function pointers and
 /// closures; no clock, so results depend only on the script), our domain packages, the limits of
 /// `settings`, output routed to the current sink, and the interrupt check.
-pub(crate) fn build_engine(settings: &SessionSettings, sink: &SinkSlot, interrupt: &InterruptHandle) -> (Engine, Arc<Docs>) {
+pub(crate) fn build_engine(
+    settings: &SessionSettings,
+    sink: &SinkSlot,
+    interrupt: &InterruptHandle,
+) -> (Engine, Arc<Docs>) {
     let mut engine = Engine::new_raw();
     register_standard_packages(&mut engine);
     apply_limits(&mut engine, settings);

@@ -1,5 +1,5 @@
-use crate::errors::{closest, split_kind};
 use super::SessionSettings;
+use crate::errors::{closest, split_kind};
 use crate::help::Docs;
 use rhai::{EvalAltResult, ParseError, Position};
 
@@ -80,13 +80,21 @@ fn classify(err: &EvalAltResult, settings: &SessionSettings, docs: &Docs) -> (St
     let kind = match err {
         E::ErrorRuntime(value, _) => return runtime_value(&value.to_string()),
         E::ErrorTerminated(..) => return ("Interrupted".into(), "the cell was interrupted".into()),
-        E::ErrorFunctionNotFound(signature, _) => return ("NameError".into(), unknown_function(signature, &docs.names())),
-        E::ErrorDotExpr(text, _) if text.starts_with("Unknown property") => return ("NameError".into(), unknown_field(text, docs)),
+        E::ErrorFunctionNotFound(signature, _) => {
+            return ("NameError".into(), unknown_function(signature, &docs.names()))
+        }
+        E::ErrorDotExpr(text, _) if text.starts_with("Unknown property") => {
+            return ("NameError".into(), unknown_field(text, docs))
+        }
         E::ErrorParsing(..) => "SyntaxError",
         E::ErrorVariableNotFound(..) | E::ErrorPropertyNotFound(..) | E::ErrorModuleNotFound(..) => "NameError",
-        E::ErrorMismatchDataType(..) | E::ErrorMismatchOutputType(..) | E::ErrorIndexingType(..) | E::ErrorFor(..) => "TypeError",
+        E::ErrorMismatchDataType(..) | E::ErrorMismatchOutputType(..) | E::ErrorIndexingType(..) | E::ErrorFor(..) => {
+            "TypeError"
+        }
         E::ErrorArithmetic(..) => "ArithmeticError",
-        E::ErrorArrayBounds(..) | E::ErrorStringBounds(..) | E::ErrorBitFieldBounds(..) | E::ErrorIndexNotFound(..) => "IndexError",
+        E::ErrorArrayBounds(..) | E::ErrorStringBounds(..) | E::ErrorBitFieldBounds(..) | E::ErrorIndexNotFound(..) => {
+            "IndexError"
+        }
         _ => "RuntimeError",
     };
     (kind.into(), plain_message(err))

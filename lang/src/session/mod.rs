@@ -1,11 +1,11 @@
 //! The session: a persistent Rhai evaluation context with limits, interrupt and editor services.
 mod completeness;
 mod completion;
-mod scan;
 mod engine;
 mod error;
 mod inspection;
 mod interrupt;
+mod scan;
 mod settings;
 mod sink_slot;
 
@@ -87,7 +87,10 @@ impl Session {
 
     /// Names of the script functions defined so far, with their parameters.
     pub fn script_functions(&self) -> Vec<(String, Vec<String>)> {
-        self.functions.iter_functions().map(|f| (f.name.to_string(), f.params.iter().map(|p| p.to_string()).collect())).collect()
+        self.functions
+            .iter_functions()
+            .map(|f| (f.name.to_string(), f.params.iter().map(|p| p.to_string()).collect()))
+            .collect()
     }
 }
 
@@ -105,7 +108,9 @@ impl Session {
             .gen_fn_signatures(false)
             .into_iter()
             .filter_map(|sig| sig.split('(').next().map(str::to_string))
-            .filter(|name| !name.starts_with("get$") && !name.starts_with("set$") && name != "to_string")
+            .filter(|name| {
+                !name.starts_with("get$") && !name.starts_with("set$") && name != "to_string" && name != "to_debug"
+            })
             .collect();
         names.sort();
         names.dedup();

@@ -105,7 +105,10 @@ fn every_bad_script_gives_its_message_at_a_position_without_panic_or_hang() {
             Ok(Ok(value)) => failures.push(format!("no error from {script}: {value:?}")),
             Ok(Err(e)) => {
                 if e.kind != *kind || !e.message.contains(fragment) || e.line.is_none() {
-                    failures.push(format!("{script}\n  expected {kind} containing {fragment:?}\n  got {} {:?} at {:?}:{:?}", e.kind, e.message, e.line, e.column));
+                    failures.push(format!(
+                        "{script}\n  expected {kind} containing {fragment:?}\n  got {} {:?} at {:?}:{:?}",
+                        e.kind, e.message, e.line, e.column
+                    ));
                 }
             }
         }
@@ -116,5 +119,11 @@ fn every_bad_script_gives_its_message_at_a_position_without_panic_or_hang() {
         let alive = session.eval("1 + 1", Arc::new(CollectedOutput::default()));
         assert_eq!(alive.unwrap().unwrap().text_plain(), Some("2"), "session unusable after {script}");
     }
-    assert!(failures.is_empty(), "{} of {} bad scripts misbehaved:\n{}", failures.len(), CATALOGUE.len(), failures.join("\n"));
+    assert!(
+        failures.is_empty(),
+        "{} of {} bad scripts misbehaved:\n{}",
+        failures.len(),
+        CATALOGUE.len(),
+        failures.join("\n")
+    );
 }

@@ -85,7 +85,11 @@ fn option_errors_name_key_value_range_and_position() {
     assert!(e.message.contains("unknown option 'diametr_cm'; did you mean 'diameter_cm'?"), "{}", e.message);
     assert_eq!((e.line, e.column), (Some(2), Some(9)));
     let e = error(&mut s, "driver_outline(#{ diameter_cm: 500 })");
-    assert!(e.message.contains("'diameter_cm' = 500 is out of range; expected a number from 1 to 200"), "{}", e.message);
+    assert!(
+        e.message.contains("'diameter_cm' = 500 is out of range; expected a number from 1 to 200"),
+        "{}",
+        e.message
+    );
     let e = error(&mut s, "driver_outline(#{ diameter_cm: \"big\" })");
     assert!(e.message.contains("is not a number"), "{}", e.message);
     let e = error(&mut s, "let p = material(\"p\", 1.0); rim_layup(p, p, #{})");
@@ -97,7 +101,10 @@ fn completion_offers_option_keys_of_the_call() {
     let s = session();
     let code = "let o = driver_outline(#{ diameter_cm: 21.1, rim_";
     let c = s.complete(code, code.chars().count());
-    assert!(c.matches.contains(&"rim_width_cm".to_string()) && c.matches.contains(&"rim_depth_cm".to_string()), "{c:?}");
+    assert!(
+        c.matches.contains(&"rim_width_cm".to_string()) && c.matches.contains(&"rim_depth_cm".to_string()),
+        "{c:?}"
+    );
     assert!(!c.matches.contains(&"diameter_cm".to_string()));
 }
 
@@ -191,13 +198,24 @@ fn efforts_give_each_disc_its_own_speed_and_spin() {
     let plate = Material::from_g_cm3("soft base blend", 0.95).unwrap();
     let report = engine_design(Layup::single(plate));
     let effort = spinfoil_engine::EffortThrow {
-        effort: spinfoil_engine::Effort::Independent(spinfoil_engine::IndependentEffort::new(48.0, 1.1, 140f64.to_radians())),
-        pose: spinfoil_engine::ReleasePose { launch_rad: 9f64.to_radians(), roll_rad: 4f64.to_radians(), ..Default::default() },
+        effort: spinfoil_engine::Effort::Independent(spinfoil_engine::IndependentEffort::new(
+            48.0,
+            1.1,
+            140f64.to_radians(),
+        )),
+        pose: spinfoil_engine::ReleasePose {
+            launch_rad: 9f64.to_radians(),
+            roll_rad: 4f64.to_radians(),
+            ..Default::default()
+        },
     };
     let release = effort.release(&report.properties, report.outline.diameter_m() / 2.0).unwrap();
     assert_same(&mut s, "arm.release_for(one_piece).speed_mps", release.speed_mps);
     assert_same(&mut s, "arm.release_for(one_piece).spin_rpm", release.spin_rad_s * 60.0 / std::f64::consts::TAU);
-    assert!(number(&mut s, "arm.release_for(rim_heavy).spin_rpm") < number(&mut s, "arm.release_for(one_piece).spin_rpm"), "the rim-heavy disc spins slower from the same effort");
+    assert!(
+        number(&mut s, "arm.release_for(rim_heavy).spin_rpm") < number(&mut s, "arm.release_for(one_piece).spin_rpm"),
+        "the rim-heavy disc spins slower from the same effort"
+    );
     let e = error(&mut s, "effort(#{ work_j: 48, torque_nm: 1.1 })");
     assert!(e.message.contains("give torque_nm and wrist_deg together"), "{}", e.message);
 }
@@ -207,7 +225,8 @@ fn environments_match_the_engines_air() {
     let mut s = session();
     value(&mut s, "let day = environment(#{ altitude_m: 420, temperature_c: 18, humidity_pct: 60, wind_mps: 3, wind_from_deg: 250 });");
     let offset = 18.0 + 273.15 - spinfoil_engine::isa_temperature_k(420.0);
-    let air = spinfoil_engine::AirSpec::standard_with_offset(420.0, offset).with_relative_humidity_pct(60.0).build().unwrap();
+    let air =
+        spinfoil_engine::AirSpec::standard_with_offset(420.0, offset).with_relative_humidity_pct(60.0).build().unwrap();
     assert_same(&mut s, "day.density_kg_m3", air.density_kg_m3);
     assert!((number(&mut s, "day.temperature_c") - 18.0).abs() < 1e-9);
     let measured = spinfoil_engine::AirSpec::measured(95_000.0, 283.15).build().unwrap();
@@ -228,10 +247,19 @@ fn flights_expose_the_engines_metrics_and_trajectory() {
     let plate = Material::from_g_cm3("soft base blend", 0.95).unwrap();
     let report = engine_design(Layup::single(plate));
     let body = spinfoil_engine::DiscBody::from_mass_properties(&report.properties, report.outline.diameter_m());
-    let release = spinfoil_engine::ReleasePose { launch_rad: 10f64.to_radians(), nose_rad: 1f64.to_radians(), ..Default::default() }
-        .with_speed_and_spin(24.0, 900.0 / 60.0 * std::f64::consts::TAU);
-    let conditions = spinfoil_engine::FlightConditions { air: spinfoil_engine::AirSpec::standard(0.0).build().unwrap(), ..Default::default() };
-    let flight = spinfoil_engine::fly(&body, &spinfoil_engine::demo_driver(), &release, &conditions, &Default::default()).unwrap();
+    let release = spinfoil_engine::ReleasePose {
+        launch_rad: 10f64.to_radians(),
+        nose_rad: 1f64.to_radians(),
+        ..Default::default()
+    }
+    .with_speed_and_spin(24.0, 900.0 / 60.0 * std::f64::consts::TAU);
+    let conditions = spinfoil_engine::FlightConditions {
+        air: spinfoil_engine::AirSpec::standard(0.0).build().unwrap(),
+        ..Default::default()
+    };
+    let flight =
+        spinfoil_engine::fly(&body, &spinfoil_engine::demo_driver(), &release, &conditions, &Default::default())
+            .unwrap();
     assert_same(&mut s, "f.carry_m", flight.metrics.carry_m);
     assert_same(&mut s, "f.apex_m", flight.metrics.apex_m);
     assert_same(&mut s, "f.turn_m", flight.metrics.turn_m);
@@ -270,7 +298,10 @@ fn designs_round_trip_through_json_and_toml() {
     }
     value(&mut s, "let t = throw_release(#{ speed_mps: 24, spin_rpm: 900, hyzer_deg: 5 }); save(t, \"t.toml\");");
     assert_eq!(value(&mut s, "load_throw(\"t.toml\").hyzer_deg == t.hyzer_deg"), "true");
-    value(&mut s, "let day = environment(#{ altitude_m: 420, wind_mps: 3, wind_from_deg: 250 }); save(day, \"day.json\");");
+    value(
+        &mut s,
+        "let day = environment(#{ altitude_m: 420, wind_mps: 3, wind_from_deg: 250 }); save(day, \"day.json\");",
+    );
     assert_eq!(value(&mut s, "load_environment(\"day.json\").density_kg_m3 == day.density_kg_m3"), "true");
     let e = error(&mut s, "load_disc(\"t.toml\")");
     assert!(e.message.contains("holds a throw, not a disc"), "{}", e.message);
@@ -287,7 +318,11 @@ fn exports_are_written_atomically_inside_the_study_folder() {
     assert!(text.starts_with("time_s,x_m"), "{}", &text[..40]);
     value(&mut s, "save_text(compare_mass([one_piece, rim_heavy]).to_csv(), \"mass.csv\");");
     assert!(std::fs::read_to_string(dir.join("mass.csv")).unwrap().contains("P-7 rim-heavy"));
-    let leftovers: Vec<_> = std::fs::read_dir(&dir).unwrap().filter_map(|e| e.ok()).filter(|e| e.file_name().to_string_lossy().ends_with(".partial")).collect();
+    let leftovers: Vec<_> = std::fs::read_dir(&dir)
+        .unwrap()
+        .filter_map(|e| e.ok())
+        .filter(|e| e.file_name().to_string_lossy().ends_with(".partial"))
+        .collect();
     assert!(leftovers.is_empty());
     let _ = std::fs::remove_dir_all(&dir);
 }
@@ -335,13 +370,26 @@ fn charts_of_flights_and_discs_render_svg() {
     value(&mut s, TWO_DISCS);
     value(&mut s, "let t = throw_release(#{ speed_mps: 24, spin_rpm: 900, launch_deg: 10 }); let a = fly(one_piece, t); let b = fly(rim_heavy, t);");
     let sink = std::sync::Arc::new(spinfoil_lang::CollectedOutput::default());
-    for cell in ["plan_view([a, b])", "side_view(a)", "time_series([a, b])", "cross_section(rim_heavy)", "mass_bars([one_piece, rim_heavy])", "coefficient_curves(one_piece)"] {
+    for cell in [
+        "plan_view([a, b])",
+        "side_view(a)",
+        "time_series([a, b])",
+        "cross_section(rim_heavy)",
+        "mass_bars([one_piece, rim_heavy])",
+        "coefficient_curves(one_piece)",
+    ] {
         let bundle = s.eval(cell, sink.clone()).unwrap().unwrap();
         let svg = &bundle.data["image/svg+xml"];
         assert!(svg.contains("<svg"), "{cell}");
-        assert!(svg.contains("P-7 one-piece") || svg.contains("P-7 rim-heavy"), "{cell}: legend or title names the design");
+        assert!(
+            svg.contains("P-7 one-piece") || svg.contains("P-7 rim-heavy"),
+            "{cell}: legend or title names the design"
+        );
     }
-    assert!(value(&mut s, "plan_view([a, b]).to_svg()").starts_with("<svg") || value(&mut s, "plan_view([a, b]).to_svg()").contains("<svg"));
+    assert!(
+        value(&mut s, "plan_view([a, b]).to_svg()").starts_with("<svg")
+            || value(&mut s, "plan_view([a, b]).to_svg()").contains("<svg")
+    );
     let e = error(&mut s, "plan_view([])");
     assert!(e.message.contains("give at least one Flight"), "{}", e.message);
 }
@@ -368,9 +416,21 @@ fn a_ground_in_the_environment_plays_the_landing_out_to_rest() {
     let body = spinfoil_engine::DiscBody::from_mass_properties(&report.properties, report.outline.diameter_m());
     let release = spinfoil_engine::ReleasePose { launch_rad: 10f64.to_radians(), ..Default::default() }
         .with_speed_and_spin(22.0, 850.0 / 60.0 * std::f64::consts::TAU);
-    let conditions = spinfoil_engine::FlightConditions { air: spinfoil_engine::AirSpec::standard(0.0).build().unwrap(), ..Default::default() };
+    let conditions = spinfoil_engine::FlightConditions {
+        air: spinfoil_engine::AirSpec::standard(0.0).build().unwrap(),
+        ..Default::default()
+    };
     let ground = spinfoil_engine::Ground::level(spinfoil_engine::SurfacePreset::PackedDirt);
-    let to_rest = spinfoil_engine::fly_to_rest(&body, &spinfoil_engine::demo_driver(), &release, &conditions, &Default::default(), &ground, &Default::default()).unwrap();
+    let to_rest = spinfoil_engine::fly_to_rest(
+        &body,
+        &spinfoil_engine::demo_driver(),
+        &release,
+        &conditions,
+        &Default::default(),
+        &ground,
+        &Default::default(),
+    )
+    .unwrap();
     assert_same(&mut s, "f.ground_play_m", to_rest.ground.ground_play_m);
     assert_same(&mut s, "f.carry_m", to_rest.flight.metrics.carry_m);
     assert_eq!(value(&mut s, "f.ground_ending"), to_rest.ground.describe());
@@ -382,7 +442,10 @@ fn outlines_from_points_match_the_engine() {
     let mut s = session();
     value(&mut s, "let o = outline_points([[0, 1.6], [10.55, 1.2], [10.55, 0.0], [8.4, 0.0], [8.4, 1.0], [0, 1.0]]);");
     let points = [(0.0, 1.6), (10.55, 1.2), (10.55, 0.0), (8.4, 0.0), (8.4, 1.0), (0.0, 1.0)];
-    let engine = spinfoil_engine::Outline::from_points(points.iter().map(|(r, z)| spinfoil_engine::RzPoint::new(r / 100.0, z / 100.0)).collect()).unwrap();
+    let engine = spinfoil_engine::Outline::from_points(
+        points.iter().map(|(r, z)| spinfoil_engine::RzPoint::new(r / 100.0, z / 100.0)).collect(),
+    )
+    .unwrap();
     assert_same(&mut s, "o.area_cm2", engine.area_m2() * 1e4);
     assert_same(&mut s, "o.diameter_cm", engine.diameter_m() * 100.0);
     assert_eq!(value(&mut s, "o.family"), "points");

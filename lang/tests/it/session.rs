@@ -110,7 +110,8 @@ fn interrupt_stops_a_runaway_loop_within_a_second() {
 
 #[test]
 fn limits_give_clear_errors() {
-    let settings = SessionSettings { max_operations: 10_000, max_array_size: 100, max_call_depth: 16, ..Default::default() };
+    let settings =
+        SessionSettings { max_operations: 10_000, max_array_size: 100, max_call_depth: 16, ..Default::default() };
     let mut s = Session::new(settings);
     let e = error(&mut s, "let i = 0; while true { i += 1; }");
     assert_eq!(e.kind, "LimitError");
@@ -207,7 +208,10 @@ fn the_reference_page_is_current() {
     let path = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("../docs/reference.md");
     let committed = std::fs::read_to_string(&path).unwrap_or_default();
     let generated = session().docs().reference_markdown();
-    assert!(committed == generated, "docs/reference.md is stale: run `cargo run -p spinfoil-lang --example reference > docs/reference.md`");
+    assert!(
+        committed == generated,
+        "docs/reference.md is stale: run `cargo run -p spinfoil-lang --example reference > docs/reference.md`"
+    );
 }
 
 #[test]
@@ -215,14 +219,18 @@ fn completion_inside_an_option_map_offers_its_keys() {
     let s = session();
     let code = "let t = throw_release(#{ sp";
     let c = s.complete(code, code.chars().count());
-    assert_eq!(c.matches, vec!["speed_kmh".to_string(), "speed_mps".to_string(), "spin_rpm".to_string(), "spin_rps".to_string()]);
+    assert_eq!(
+        c.matches,
+        vec!["speed_kmh".to_string(), "speed_mps".to_string(), "spin_rpm".to_string(), "spin_rps".to_string()]
+    );
     assert_eq!((c.cursor_start, c.cursor_end), (25, 27));
 }
 
 #[test]
 fn show_with_an_id_can_be_updated() {
     let mut s = session();
-    let (_, events) = run(&mut s, "show(\"starting\", \"progress\"); for i in 1..=2 { update_display(`run ${i}`, \"progress\"); }");
+    let (_, events) =
+        run(&mut s, "show(\"starting\", \"progress\"); for i in 1..=2 { update_display(`run ${i}`, \"progress\"); }");
     assert_eq!(events.len(), 3);
     assert!(matches!(&events[0], OutputEvent::Display(_, Some(id)) if id == "progress"));
     assert!(matches!(&events[2], OutputEvent::Update(b, id) if id == "progress" && b.text_plain() == Some("run 2")));
@@ -241,9 +249,12 @@ fn inspect_a_domain_variable_lists_its_fields() {
 fn domain_values_print_and_render_as_readable_text() {
     let mut s = session();
     assert_eq!(value(&mut s, "material(\"base\", 0.95)"), "material \"base\" (0.950 g/cm³)");
-    let (_, events) = run(&mut s, "print(material(\"base\", 0.95)); show(throw_release(#{ speed_mps: 20, spin_rpm: 800 }))");
+    let (_, events) =
+        run(&mut s, "print(material(\"base\", 0.95)); show(throw_release(#{ speed_mps: 20, spin_rpm: 800 }))");
     assert_eq!(events[0], OutputEvent::Stdout("material \"base\" (0.950 g/cm³)\n".into()));
-    assert!(matches!(&events[1], OutputEvent::Display(b, None) if b.text_plain().unwrap().starts_with("right backhand release: 20.0 m/s, 800 rpm")));
+    assert!(
+        matches!(&events[1], OutputEvent::Display(b, None) if b.text_plain().unwrap().starts_with("right backhand release: 20.0 m/s, 800 rpm"))
+    );
 }
 
 #[test]
@@ -280,7 +291,12 @@ fn completion_after_a_dot_offers_fields_and_methods_of_the_type() {
     let mut s = session();
     value(&mut s, "let d = disc(\"P-7\", driver_outline(), single_layup(material(\"base\", 0.95))); let f = fly(d, throw_release(#{ speed_mps: 20, spin_rpm: 800 }));");
     let c = s.complete("f.t", 3);
-    assert!(c.matches.contains(&"time_aloft_s".to_string()) && c.matches.contains(&"trajectory".to_string()) && c.matches.contains(&"to_csv".to_string()), "{c:?}");
+    assert!(
+        c.matches.contains(&"time_aloft_s".to_string())
+            && c.matches.contains(&"trajectory".to_string())
+            && c.matches.contains(&"to_csv".to_string()),
+        "{c:?}"
+    );
     assert!(!c.matches.contains(&"to_svg".to_string()), "charts' methods are not a flight's: {c:?}");
 }
 
@@ -289,4 +305,14 @@ fn a_session_can_move_to_another_thread() {
     fn assert_send<T: Send>() {}
     assert_send::<Session>();
     assert_send::<spinfoil_lang::InterruptHandle>();
+}
+
+#[test]
+fn debug_shows_domain_values_readably() {
+    let mut s = session();
+    let (_, events) = run(&mut s, "debug(material(\"base\", 0.95))");
+    assert!(
+        matches!(&events[0], OutputEvent::Stderr(t) if t.ends_with("material \"base\" (0.950 g/cm³)\n")),
+        "{events:?}"
+    );
 }
