@@ -11,7 +11,8 @@ pub struct SessionSettings {
     pub max_array_size: usize,
     /// Largest length of one string, in bytes (default 16 000 000).
     pub max_string_size: usize,
-    /// Largest number of entries in one object map (default 100 000).
+    /// Largest number of entries in one object map (default 100 000). Rhai 1.27 checks it on
+    /// map operations and function results, not on a single `m[key] = v` insertion.
     pub max_map_size: usize,
     /// Deepest nesting of script function calls (default 64).
     pub max_call_depth: usize,

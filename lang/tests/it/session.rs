@@ -125,6 +125,18 @@ fn limits_give_clear_errors() {
 }
 
 #[test]
+fn map_and_string_limits_give_clear_errors() {
+    let settings = SessionSettings { max_map_size: 10, max_string_size: 1000, ..Default::default() };
+    let mut s = Session::new(settings);
+    let e = error(&mut s, "let m = #{}; for i in 0..20 { let one = #{}; one[`k${i}`] = i; m.mixin(one); } m");
+    assert_eq!(e.kind, "LimitError");
+    assert!(e.message.contains("maps 10 entries"), "{}", e.message);
+    let e = error(&mut s, "let t = \"x\"; for i in 0..20 { t += t; } t");
+    assert_eq!(e.kind, "LimitError");
+    assert!(e.message.contains("strings 1000 bytes"), "{}", e.message);
+}
+
+#[test]
 fn the_same_script_gives_the_same_result() {
     let script = "let v = []; for i in 0..50 { v.push(sin(i.to_float()) * 3.0); } v.reduce(|a, b| a + b, 0.0)";
     let a = value(&mut session(), script);
