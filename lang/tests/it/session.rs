@@ -328,3 +328,20 @@ fn debug_shows_domain_values_readably() {
         "{events:?}"
     );
 }
+
+/// Regression guard: editor services never panic, whatever the text and the cursor.
+#[test]
+fn editor_services_never_panic_on_any_prefix_or_cursor() {
+    let s = session();
+    let script = "let é = \"a(\\\"b\"; /* ( */ fn f(x) { x.to_csv() }\nthrow_release(#{ sp: `x${1}`, [1, 2]\n// end ü";
+    let chars: Vec<char> = script.chars().collect();
+    for end in 0..=chars.len() {
+        let prefix: String = chars[..end].iter().collect();
+        let _ = s.is_complete(&prefix);
+        for cursor in 0..=end + 1 {
+            let c = s.complete(&prefix, cursor);
+            assert!(c.cursor_start <= c.cursor_end && c.cursor_end <= end.max(cursor));
+            let _ = s.inspect(&prefix, cursor);
+        }
+    }
+}
