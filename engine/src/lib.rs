@@ -16,6 +16,7 @@
 //! - [`throw`](crate::throw): release states and effort forms.
 //! - [`dynamics`](crate::dynamics): the rigid-body equations of motion.
 //! - [`flight`](crate::flight): integration, landing, trajectory and metrics.
+//! - [`study`](crate::study): sweeps, dispersion, calibration, optimisation, flight signatures.
 //! - [`ground`](crate::ground): surfaces, rim contact, impacts and ground play after landing.
 //!
 //! World frame: x downrange, y to the left, z up. The disc's symmetry axis is the unit normal
@@ -33,6 +34,7 @@ pub mod layup;
 pub mod mass;
 pub mod mesh;
 pub mod standards;
+pub mod study;
 pub mod throw;
 pub mod wind;
 
@@ -46,6 +48,7 @@ pub use layup::*;
 pub use mass::*;
 pub use mesh::*;
 pub use standards::*;
+pub use study::*;
 pub use throw::*;
 pub use wind::*;
 

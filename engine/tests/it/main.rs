@@ -6,5 +6,6 @@ mod common;
 mod flight;
 mod ground;
 mod mass;
+mod study;
 mod throw;
 mod wind;

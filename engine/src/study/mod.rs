@@ -1,0 +1,1 @@
+//! Studies: sweeps, dispersion, calibration, optimisation and flight signatures (parallel, seeded, deterministic).
