@@ -40,15 +40,33 @@ pub(crate) fn flight_table(flights: &[FlightValue]) -> Table {
     for (_, name, unit, decimals) in FLIGHT_COLUMNS {
         table = table.column(*name, *unit, *decimals);
     }
+    let on_ground = flights.iter().any(|f| f.ground.is_some());
+    if on_ground {
+        table = table.column("ground play", "m", 1).column("rest distance", "m", 1);
+    }
     for flight in flights {
         let mut row = vec![Cell::from(flight.label.as_str())];
         for (field, ..) in FLIGHT_COLUMNS {
             let get = METRICS.iter().find(|(f, ..)| f == field).map(|(_, _, g)| *g);
             row.push(get.map_or(Cell::Empty, |g| Cell::Number(g(flight))));
         }
+        if on_ground {
+            row.extend(ground_cells(flight));
+        }
         table = table.row(row);
     }
     table.note(crate::SAFETY_CAUTION)
+}
+
+/// Ground play (m) and the distance from the release point to rest (m), or empty cells.
+fn ground_cells(flight: &FlightValue) -> [Cell; 2] {
+    match &flight.ground {
+        Some(ground) => {
+            let shift = ground.rest_position_m - flight.flight.release_state.position_m;
+            [Cell::Number(ground.ground_play_m), Cell::Number(shift.x.hypot(shift.y))]
+        }
+        None => [Cell::Empty, Cell::Empty],
+    }
 }
 
 /// Registers `compare_mass`.
