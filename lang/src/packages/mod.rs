@@ -9,6 +9,7 @@ mod flights;
 mod layups;
 mod materials;
 mod outlines;
+mod pause;
 mod show;
 mod tables;
 mod throws;
@@ -20,7 +21,7 @@ pub(crate) use throws::ThrowValue;
 
 use crate::help::Registrar;
 use crate::output::MimeBundle;
-use crate::session::SinkSlot;
+use crate::session::{InterruptHandle, SinkSlot};
 use rhai::Dynamic;
 use std::path::PathBuf;
 
@@ -30,6 +31,8 @@ use std::path::PathBuf;
 pub(crate) struct PackageContext {
     /// Where `show` sends displays.
     pub sink: SinkSlot,
+    /// Checked by calls that wait (`sleep`).
+    pub interrupt: InterruptHandle,
     /// The only folder scripts may read and write (None: no file access).
     pub study_dir: Option<PathBuf>,
 }
@@ -46,6 +49,7 @@ pub(crate) fn register_packages(reg: &mut Registrar, context: &PackageContext) {
     tables::register(reg);
     charts::register(reg);
     show::register(reg, context);
+    pause::register(reg, context);
     crate::files::register(reg, context.study_dir.clone());
 }
 

@@ -27,7 +27,8 @@ pub(crate) fn build_engine(
     let docs_cell: Arc<OnceLock<Arc<Docs>>> = Arc::default();
     {
         let mut reg = Registrar::new(&mut engine, &mut docs);
-        let context = PackageContext { sink: sink.clone(), study_dir: settings.study_dir.clone() };
+        let context =
+            PackageContext { sink: sink.clone(), interrupt: interrupt.clone(), study_dir: settings.study_dir.clone() };
         register_packages(&mut reg, &context);
         register_help(&mut reg, docs_cell.clone());
     }

@@ -345,3 +345,20 @@ fn editor_services_never_panic_on_any_prefix_or_cursor() {
         }
     }
 }
+
+#[test]
+fn a_long_sleep_obeys_interrupt() {
+    let mut s = session();
+    let handle = s.interrupt_handle();
+    let stopper = std::thread::spawn(move || {
+        std::thread::sleep(Duration::from_millis(200));
+        handle.interrupt();
+        Instant::now()
+    });
+    let (result, _) = run(&mut s, "sleep(100000); 1");
+    let stopped = Instant::now();
+    let asked = stopper.join().unwrap();
+    assert_eq!(result.unwrap_err().kind, "Interrupted");
+    assert!(stopped.duration_since(asked) < Duration::from_secs(3), "took {:?}", stopped.duration_since(asked));
+    assert_eq!(value(&mut s, "sleep(0.01); 2"), "2");
+}
