@@ -362,3 +362,10 @@ fn a_long_sleep_obeys_interrupt() {
     assert!(stopped.duration_since(asked) < Duration::from_secs(3), "took {:?}", stopped.duration_since(asked));
     assert_eq!(value(&mut s, "sleep(0.01); 2"), "2");
 }
+
+#[test]
+fn exit_ends_the_cell_with_its_value_and_the_session_goes_on() {
+    let mut s = session();
+    assert_eq!(value(&mut s, "let kept = 3; exit(7); 99"), "7");
+    assert_eq!(value(&mut s, "kept"), "3");
+}
