@@ -4,7 +4,9 @@ use serde::{Deserialize, Serialize};
 
 use crate::dynamics::{DiscBody, DiscState};
 
+use super::sample::wobble_rad;
 use super::trajectory::Trajectory;
+use super::wobble::wobble_half_time_s;
 
 /// Summary numbers of one flight, SI units.
 ///
@@ -61,6 +63,15 @@ pub struct FlightMetrics {
     /// Largest rate of the axis, max |**ṅ**| over the solver's steps, rad/s (roll and pitch
     /// motion of the disc plane, nutation included).
     pub max_axis_rate_rad_s: f64,
+    /// Wobble angle at release, rad: the angle between **n** and the line of **H**
+    /// ([`super::wobble_rad`]); tan θ = I_x |ω⊥| / (I_z |ω_s|) (see [`super::wobble_rate_for_angle`]).
+    #[serde(default)]
+    pub initial_wobble_rad: f64,
+    /// Time to halve the wobble, s: the first time after release at which the wobble angle has
+    /// fallen to half of `initial_wobble_rad` (located on the dense output to 1 ns). `None` when
+    /// the release had no wobble (< 1e-9 rad) or the wobble never halved before landing.
+    #[serde(default)]
+    pub wobble_half_time_s: Option<f64>,
 }
 
 /// What the metrics need from the throw.
@@ -114,6 +125,8 @@ pub(crate) fn flight_metrics(trajectory: &Trajectory, body: &DiscBody, frame: &M
         fade_m: frame.fade_side * (landing_lateral - frame.lateral_m(&trajectory.state_at(turn_time_s).position_m)),
         heading_change_rad: frame.fade_side * wrap_angle(v.y.atan2(v.x) - frame.heading_rad),
         max_axis_rate_rad_s: max_axis_rate,
+        initial_wobble_rad: wobble_rad(&release, body),
+        wobble_half_time_s: wobble_half_time_s(trajectory, body),
     }
 }
 

@@ -16,6 +16,9 @@
 //!   ever returned.
 //! - Initial state from a [`crate::ReleaseState`]: [`initial_state`] documents how the velocity,
 //!   **n**, **ṅ** and ω_s are constructed.
+//! - Wobble: the angle between **n** and the angular momentum's line; the helpers that turn a
+//!   wobble angle into a release's transverse rate, and the derivation, are in the `wobble`
+//!   module ([`wobble_rate_for_angle`]).
 mod conditions;
 mod error;
 mod fly;
@@ -25,6 +28,7 @@ mod sample;
 mod settings;
 mod system;
 mod trajectory;
+mod wobble;
 
 pub use conditions::FlightConditions;
 pub use error::FlightError;
@@ -33,3 +37,4 @@ pub use metrics::FlightMetrics;
 pub use release::initial_state;
 pub use sample::{angle_of_attack_rad, wobble_rad, FlightSample};
 pub use settings::FlightSettings;
+pub use wobble::{release_with_wobble, wobble_angle_for_rate, wobble_rate_for_angle, MAX_WOBBLE_RAD};

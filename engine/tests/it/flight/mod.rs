@@ -6,6 +6,7 @@ mod metrics;
 mod pitching_moment;
 mod robustness;
 mod vacuum;
+mod wobble;
 
 use std::sync::Arc;
 
