@@ -4,7 +4,7 @@ use serde::{Deserialize, Serialize};
 /// χ² quantile with 2 degrees of freedom for 50 %: −2 ln(0.5) = 1.386 (exact for 2 dof).
 pub const CHI2_2DOF_50: f64 = 1.386_294_361_119_890_6;
 /// χ² quantile with 2 degrees of freedom for 95 %: −2 ln(0.05) = 5.991 (exact for 2 dof).
-pub const CHI2_2DOF_95: f64 = 5.991_464_547_107_979;
+pub const CHI2_2DOF_95: f64 = 5.991_464_547_107_982;
 
 /// A confidence ellipse of a 2-D normal: semi-axes in m, orientation of the major axis.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize, Deserialize)]
