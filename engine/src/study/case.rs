@@ -5,7 +5,7 @@ use serde::{Deserialize, Serialize};
 
 use crate::{
     fly, fly_to_rest, AeroModel, AirSpec, DiscBody, DiscDesign, FlightConditions, FlightSettings, Ground, GroundSettings,
-    ReleaseState, WindSpec,
+    Effort, EffortThrow, MassProperties, ReleasePose, ReleaseState, WindSpec,
 };
 
 use super::model::CaseModel;
@@ -50,8 +50,14 @@ pub struct StudyCase {
     pub disc: CaseDisc,
     /// The coefficient set, with scale factors.
     pub model: CaseModel,
-    /// The release state.
+    /// The release state. With an [`effort`](Self::effort), only its pose (angles, height,
+    /// wobble, style, hand) is used: the effort and the disc give speed and spin.
     pub release: ReleaseState,
+    /// A player's effort (work and wrist torque, or coupled work): when set, the release speed
+    /// and spin come from it and the disc's mass properties (work–energy theorem), so designs
+    /// compare "from the same throw".
+    #[serde(default)]
+    pub effort: Option<Effort>,
     /// The air.
     pub air: AirSpec,
     /// The wind.
@@ -71,6 +77,7 @@ impl StudyCase {
             disc,
             model,
             release,
+            effort: None,
             air: AirSpec::standard(0.0),
             wind: WindSpec::calm(),
             ground: None,
@@ -97,16 +104,42 @@ impl StudyCase {
         let conditions = self.conditions()?;
         let model = self.model.scaled();
         let model: &dyn AeroModel = &model;
+        let release = self.release_for(body)?;
         match &self.ground {
             None => {
-                let flight = fly(body, model, &self.release, &conditions, &self.flight_settings)?;
+                let flight = fly(body, model, &release, &conditions, &self.flight_settings)?;
                 Ok(CaseOutcome::from_flight(&flight))
             }
             Some(ground) => {
                 let settings = &self.flight_settings;
-                let to_rest = fly_to_rest(body, model, &self.release, &conditions, settings, ground, &self.ground_settings)?;
+                let to_rest = fly_to_rest(body, model, &release, &conditions, settings, ground, &self.ground_settings)?;
                 Ok(CaseOutcome::from_rest(&to_rest))
             }
         }
+    }
+
+    /// The release state this case flies with `body`: the stored release, or, with an effort,
+    /// its pose with the speed and spin the effort gives this disc.
+    pub fn release_for(&self, body: &DiscBody) -> Result<ReleaseState, StudyError> {
+        let Some(effort) = self.effort else { return Ok(self.release) };
+        let r = &self.release;
+        let pose = ReleasePose {
+            launch_rad: r.launch_rad,
+            nose_rad: r.nose_rad,
+            roll_rad: r.roll_rad,
+            heading_rad: r.heading_rad,
+            height_m: r.height_m,
+            off_axis_rate_rad_s: r.off_axis_rate_rad_s,
+            off_axis_direction_rad: r.off_axis_direction_rad,
+            style: r.style,
+            hand: r.hand,
+        };
+        let mass = MassProperties {
+            mass_kg: body.mass_kg,
+            cg_height_m: 0.0,
+            spin_inertia_kg_m2: body.spin_inertia_kg_m2,
+            transverse_inertia_kg_m2: body.transverse_inertia_kg_m2,
+        };
+        Ok(EffortThrow { effort, pose }.release(&mass, body.radius_m())?)
     }
 }

@@ -1,7 +1,7 @@
 //! Typed errors of the study module.
 use thiserror::Error;
 
-use crate::{AeroError, AirError, FlightError, GroundError, MassError, WindError};
+use crate::{AeroError, AirError, FlightError, GroundError, MassError, ThrowError, WindError};
 
 /// Why a study (or one case of it) could not be computed.
 #[derive(Debug, Clone, PartialEq, Error)]
@@ -86,6 +86,9 @@ pub enum StudyError {
     /// The wind could not be built.
     #[error(transparent)]
     Wind(#[from] WindError),
+    /// An effort could not be turned into a release.
+    #[error(transparent)]
+    Throw(#[from] ThrowError),
     /// The coefficient set is invalid.
     #[error(transparent)]
     Aero(#[from] AeroError),

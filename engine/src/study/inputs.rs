@@ -1,5 +1,5 @@
 //! Inputs of a case addressable by name, in user units: (name, unit, meaning).
-use crate::{AirSource, CaseDisc, GustSpec, Layup, MassTarget, OutlineSource};
+use crate::{AirSource, CaseDisc, Effort, GustSpec, Layup, MassTarget, OutlineSource};
 
 use super::model::BaseModel;
 use super::{StudyCase, StudyError};
@@ -15,6 +15,9 @@ pub const INPUTS: &[(&str, &str, &str)] = &[
     ("throw.heading_deg", "°", "heading of the velocity, positive to the left"),
     ("throw.height_m", "m", "release height"),
     ("throw.wobble_rad_s", "rad/s", "off-axis angular velocity at release"),
+    ("effort.work_j", "J", "work of an effort throw (linear work, or the coupled form's total work)"),
+    ("effort.wrist_torque_n_m", "N·m", "wrist torque of an independent effort"),
+    ("effort.rim_speed_ratio", "1", "rim speed over release speed of a coupled effort"),
     ("env.wind_mps", "m/s", "mean wind speed at the reference height"),
     ("env.wind_from_deg", "°", "direction the wind comes from, 0 headwind, 90 from the left"),
     ("env.altitude_m", "m", "altitude of the standard atmosphere"),
@@ -72,6 +75,7 @@ impl StudyCase {
         let (group, field) = name.split_once('.').unwrap_or((name, ""));
         match group {
             "throw" => self.set_throw(field, value),
+            "effort" => self.effort_field(name, field).map(|f| *f = value),
             "env" => self.set_env(name, field, value),
             "disc" => self.set_mass(name, value),
             "layup" => self.set_layup(name, field, value),
@@ -87,6 +91,7 @@ impl StudyCase {
         let (group, field) = name.split_once('.').unwrap_or((name, ""));
         match group {
             "throw" => Ok(self.get_throw(field)),
+            "effort" => self.clone().effort_field(name, field).map(|f| *f),
             "env" => self.get_env(name, field),
             "model" => self.get_model(name, field),
             _ => self.get_disc(name, field),
@@ -167,6 +172,18 @@ impl StudyCase {
                     _ => o.rim_depth_m,
                 }),
             _ => Err(not_applicable(name, "the design's layup or outline has no such field")),
+        }
+    }
+
+    fn effort_field(&mut self, name: &str, field: &str) -> Result<&mut f64, StudyError> {
+        let missing = |reason: &str| Err(not_applicable(name, reason));
+        match (&mut self.effort, field) {
+            (None, _) => missing("the case has no effort; it flies its release state"),
+            (Some(Effort::Independent(e)), "work_j") => Ok(&mut e.linear_work_j),
+            (Some(Effort::Independent(e)), "wrist_torque_n_m") => Ok(&mut e.wrist_torque_n_m),
+            (Some(Effort::Coupled(e)), "work_j") => Ok(&mut e.work_j),
+            (Some(Effort::Coupled(e)), "rim_speed_ratio") => Ok(&mut e.rim_speed_ratio),
+            (Some(_), _) => missing("the case's effort form has no such field"),
         }
     }
 

@@ -110,3 +110,26 @@ fn ground_play_gives_rest_metrics() {
     assert!(outcome.metric("rest_distance_m").unwrap() > outcome.metrics.carry_m - 1.0);
     assert!(matches!(demo_case().run().unwrap().metric("rest_x_m"), Err(StudyError::NotApplicable { .. })));
 }
+
+#[test]
+fn the_same_effort_spins_a_rim_heavy_layup_slower_with_more_angular_momentum() {
+    let mut case = design_case();
+    case.effort = Some(Effort::Independent(IndependentEffort { linear_work_j: 45.0, wrist_torque_n_m: 2.0, wrist_turn_rad: 1.5, arm_mass_kg: 0.4 }));
+    case.set("disc.mass_g", 172.0).unwrap();
+    let spin_and_momentum = |rim_density: f64| {
+        let mut c = case.clone();
+        c.set("layup.rim_density_g_cm3", rim_density).unwrap();
+        let body = c.disc.body().unwrap();
+        let release = c.release_for(&body).unwrap();
+        (release.spin_rad_s, body.spin_inertia_kg_m2 * release.spin_rad_s, body.spin_inertia_kg_m2)
+    };
+    let (light_spin, light_h, light_i) = spin_and_momentum(0.95);
+    let (heavy_spin, heavy_h, heavy_i) = spin_and_momentum(1.4);
+    // Work–energy theorem: ½ I_z ω² = τ θ for the same wrist work, so ω ∝ I_z^(−1/2) and
+    // H = I_z ω ∝ I_z^(1/2) (source: physics law, Newton's second law for rotation).
+    assert!(heavy_i > light_i && heavy_spin < light_spin && heavy_h > light_h);
+    assert!(((heavy_spin / light_spin) - (light_i / heavy_i).sqrt()).abs() < 1e-9);
+    assert_eq!(case.get("effort.work_j").unwrap(), 45.0);
+    assert!(case.run().is_ok());
+    assert!(matches!(demo_case().set("effort.work_j", 40.0), Err(StudyError::NotApplicable { .. })));
+}
