@@ -25,6 +25,16 @@ impl WindField for SteadyWind {
     }
 }
 
+/// Flies the typical throw `count` times (metrics only) and prints the summed carry, for
+/// profiling and CPU-time counts (`perf stat ... -- typical-repeat 2000`).
+fn repeat_typical(count: usize) {
+    let throw = typical_throw();
+    let conditions = throw.conditions();
+    let settings = FlightSettings { record_samples: false, ..FlightSettings::default() };
+    let total: f64 = (0..count).map(|_| fly(&throw.body, &throw.model, &throw.release, &conditions, &settings).unwrap().metrics.carry_m).sum();
+    println!("{count} flights, summed carry {total:.6} m");
+}
+
 /// One reference throw: body, coefficients, wind, release.
 pub struct ReferenceThrow {
     /// The disc.
@@ -127,6 +137,10 @@ fn record(throw: &ReferenceThrow, settings: &FlightSettings) -> Value {
 }
 
 fn main() {
+    if let Some(count) = std::env::args().nth(1).filter(|a| a == "typical-repeat").and(std::env::args().nth(2)) {
+        repeat_typical(count.parse().expect("typical-repeat takes a count of flights"));
+        return;
+    }
     let typical = std::env::args().nth(1).as_deref() == Some("typical");
     let (throws, settings) = if typical {
         (vec![typical_throw()], FlightSettings { record_samples: false, ..FlightSettings::default() })

@@ -46,6 +46,10 @@ struct AeroAxes {
     pitch_axis: Vector3<f64>,
     /// Angle of attack in rad.
     alpha_rad: f64,
+    /// cos α = |in-plane part of v̂| (v̂ is a unit vector), without a trigonometric call.
+    cos_alpha: f64,
+    /// sin α = −v̂·**n**.
+    sin_alpha: f64,
 }
 
 impl AeroAxes {
@@ -53,22 +57,26 @@ impl AeroAxes {
         let along_normal = velocity_dir.dot(normal);
         let in_plane = velocity_dir - along_normal * normal;
         let in_plane_len = in_plane.norm();
-        let alpha_rad = (-along_normal).atan2(in_plane_len);
+        let (cos_alpha, sin_alpha) = (in_plane_len, -along_normal);
         if in_plane_len < IN_PLANE_EPSILON {
             let zero = Vector3::zeros();
-            return Self { velocity_dir, roll_axis: zero, pitch_axis: zero, alpha_rad };
+            let alpha_rad = sin_alpha.atan2(cos_alpha);
+            return Self { velocity_dir, roll_axis: zero, pitch_axis: zero, alpha_rad, cos_alpha, sin_alpha };
         }
-        let roll_axis = in_plane / in_plane_len;
+        // α ∈ (−π/2, π/2) here, so atan of the ratio equals atan2 (and costs less)
+        let alpha_rad = super::atan::atan(sin_alpha / cos_alpha);
+        let roll_axis = in_plane * in_plane_len.recip();
         let pitch_axis = roll_axis.cross(normal);
-        Self { velocity_dir, roll_axis, pitch_axis, alpha_rad }
+        Self { velocity_dir, roll_axis, pitch_axis, alpha_rad, cos_alpha, sin_alpha }
     }
 
-    /// Unit lift direction: the part of **n** perpendicular to v̂ (zero when undefined).
+    /// Unit lift direction: the part of **n** perpendicular to v̂, cos α **n** + sin α **e_r**
+    /// (zero when undefined).
     fn lift_dir(&self, normal: &Vector3<f64>) -> Vector3<f64> {
         if self.roll_axis == Vector3::zeros() {
             return Vector3::zeros();
         }
-        self.alpha_rad.cos() * normal + self.alpha_rad.sin() * self.roll_axis
+        self.cos_alpha * normal + self.sin_alpha * self.roll_axis
     }
 }
 
@@ -94,7 +102,7 @@ pub fn aero_loads(
     spin_rad_s: f64,
 ) -> AeroLoads {
     let speed = air_relative_velocity_mps.norm();
-    let velocity_dir = if speed > 0.0 { air_relative_velocity_mps / speed } else { Vector3::zeros() };
+    let velocity_dir = if speed > 0.0 { air_relative_velocity_mps * speed.recip() } else { Vector3::zeros() };
     let axes = AeroAxes::new(velocity_dir, normal);
     let input = aero_input(&axes, air, diameter_m, speed, angular_velocity_rad_s, spin_rad_s);
     let coefficients = model.coefficients(&input);
@@ -121,7 +129,7 @@ fn aero_input(
     angular_velocity_rad_s: &Vector3<f64>,
     spin_rad_s: f64,
 ) -> AeroInput {
-    let advance_ratio = if speed_mps > 0.0 { spin_rad_s.abs() * diameter_m / 2.0 / speed_mps } else { 0.0 };
+    let advance_ratio = if speed_mps > 0.0 { spin_rad_s.abs() * diameter_m * (0.5 * speed_mps.recip()) } else { 0.0 };
     let reynolds_number = if air.dynamic_viscosity_pa_s > 0.0 {
         air.density_kg_m3 * speed_mps * diameter_m / air.dynamic_viscosity_pa_s
     } else {

@@ -6,6 +6,7 @@
 //! optionally advance ratio, also from CSV text), a first guess from the outline
 //! ([`estimate_coefficients`]) and invented demo sets ([`demo_putter`], [`demo_midrange`],
 //! [`demo_driver`]).
+mod atan;
 mod csv_table;
 mod demo;
 mod error;

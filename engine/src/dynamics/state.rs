@@ -52,8 +52,9 @@ impl DiscState {
     /// (the constraints |**n**| = 1, **n**·**ṅ** = 0 that the integrator only keeps approximately).
     pub fn projected(&self) -> Self {
         let norm = self.normal.norm();
-        let normal = if norm > 0.0 { self.normal / norm } else { Vector3::z() };
-        let rate = self.normal_rate_per_s / norm.max(f64::MIN_POSITIVE);
+        let inverse = norm.max(f64::MIN_POSITIVE).recip();
+        let normal = if norm > 0.0 { self.normal * inverse } else { Vector3::z() };
+        let rate = self.normal_rate_per_s * inverse;
         Self { normal, normal_rate_per_s: rate - normal * normal.dot(&rate), ..*self }
     }
 

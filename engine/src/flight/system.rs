@@ -1,5 +1,5 @@
 //! The flight as an ODE system for `ode_solvers`: derivative, stop test and guards.
-use std::cell::Cell;
+use std::cell::{Cell, RefCell};
 
 use nalgebra::Vector3;
 use ode_solvers::System;
@@ -28,6 +28,9 @@ pub(crate) struct FlightSystem<'a> {
     pub non_finite: &'a Cell<Option<(f64, &'static str)>>,
     /// Set by `solout` when it stops the integration.
     pub stop: &'a Cell<Option<StopReason>>,
+    /// Every accepted step's end, recorded by `solout`: (times s, unprojected states). The same
+    /// points as the solver's own `x_out`/`y_out`, kept here so they need not be copied out.
+    pub steps: &'a RefCell<(Vec<f64>, Vec<StateVector>)>,
 }
 
 impl FlightSystem<'_> {
@@ -102,6 +105,11 @@ impl System<f64, StateVector> for FlightSystem<'_> {
     }
 
     fn solout(&mut self, t: f64, y: &StateVector, _dy: &StateVector) -> bool {
+        {
+            let mut steps = self.steps.borrow_mut();
+            steps.0.push(t);
+            steps.1.push(*y);
+        }
         let state = DiscState::from_vector(y).projected();
         if let Some(error) = self.guard(t, &state) {
             self.stop.set(Some(StopReason::Failed(error)));

@@ -1,5 +1,5 @@
 //! Running the solver: the dense solution of one flight, up to its landing.
-use std::cell::Cell;
+use std::cell::{Cell, RefCell};
 
 use ode_solvers::continuous_output_model::ContinuousOutputModel;
 use ode_solvers::dop_shared::IntegrationError;
@@ -54,7 +54,8 @@ pub(crate) fn integrate(
 ) -> Result<Trajectory, FlightError> {
     let non_finite = Cell::new(None);
     let stop = Cell::new(None);
-    let system = FlightSystem { body, model, conditions, settings, non_finite: &non_finite, stop: &stop };
+    let steps = RefCell::new((Vec::with_capacity(1024), Vec::with_capacity(1024)));
+    let system = FlightSystem { body, model, conditions, settings, non_finite: &non_finite, stop: &stop, steps: &steps };
     let mut solver = new_solver(system, settings, initial.to_vector());
     let mut dense = ContinuousOutputModel::default();
     let outcome = solver.integrate_with_continuous_output_model(&mut dense);
@@ -62,13 +63,14 @@ pub(crate) fn integrate(
         return Err(FlightError::NonFinite { time_s, quantity });
     }
     let stats = outcome.map_err(|e| solver_error(e, settings))?;
-    let last = solver.y_out().last().map_or(initial, |y| DiscState::from_vector(y).projected());
+    let (step_times_s, step_states) = steps.take();
+    let last = step_states.last().map_or(initial, |y| DiscState::from_vector(y).projected());
     let trajectory = Trajectory {
         dense,
         initial,
         last,
-        step_times_s: solver.x_out().clone(),
-        step_states: solver.y_out().clone(),
+        step_times_s,
+        step_states,
         end_time_s: settings.max_time_s,
         landed: false,
         stats: (stats.num_eval, stats.accepted_steps, stats.rejected_steps),
