@@ -37,6 +37,22 @@ const HUMMEL_ROLL_FROM_SPIN_HIS_AXES: f64 = 0.00171;
 /// (rates in rad/s; damping terms low confidence). α0 of the drag term: 0 (his 6-DOF set is
 /// quadratic about α = 0 as we remember it). Converted to our axes as the module docs say.
 ///
+/// Review (2026): the thesis text could not be reached through the project's search tools
+/// (only its title pages), so neither the values nor the frame choice above are verified.
+/// Measured in our flights for a flat right-hand backhand, 20 m/s, launch 10°, nose 5°,
+/// 15 rev/s, 1 m high, sea level, calm:
+/// - as defined here: the roll-from-spin moment (C_Rr·|ω_s| ≈ 0.16, twice |C_M0|) pitches the
+///   nose up to α ≈ 19° while C_M0 rolls the disc over toward the turn side (roll to −98°):
+///   apex 10.9 m, 3.2 s aloft, carry 7.1 m, turn 3.9 m, no fade, heading change 179°;
+/// - with the opposite sign of C_Rr: the nose drops and it lands after 0.6 s, 9.4 m out;
+/// - with C_Rr = 0: still rolls to −74° (C_M at α = 5° is −0.044, trim α = 10.8°) and carries
+///   22 m in 1.9 s (turn 4.3 m, no fade);
+/// - with every rate read non-dimensionally (ω·d/2V): carry 23.5 m, turn 7.1 m, no fade.
+///
+/// None of these readings gives a plausible 20 m/s flight, so the doubt is not only the sign of
+/// C_Rr: the magnitude of C_Rr per rad/s, and the size of C_M0 relative to C_Mα, are as
+/// uncertain. Prefer the tabulated or invented sets for distances until the thesis is checked.
+///
 /// Caution (measured in our flights, `hummel_sets_fly_a_typical_ultimate_throw_without_failing`):
 /// at 8 rev/s the roll-from-spin term C_Rr·r ≈ 0.086 outweighs C_M0, pitches the disc up and
 /// shortens a 14 m/s throw to about 12 m, which is implausible. The remembered value of C_Rr
