@@ -52,6 +52,25 @@ impl Shard {
     }
 }
 
+impl std::str::FromStr for Shard {
+    type Err = StudyError;
+
+    /// Parses `"i/N"` (0-based shard index i of N shards, e.g. `"0/4"` … `"3/4"`).
+    fn from_str(text: &str) -> Result<Self, StudyError> {
+        let bad = || StudyError::InvalidSpec { field: "shard".into(), reason: format!("\"{text}\" is not of the form i/N with 0 ≤ i < N") };
+        let (i, n) = text.trim().split_once('/').ok_or_else(bad)?;
+        let index = i.trim().parse().map_err(|_| bad())?;
+        let count = n.trim().parse().map_err(|_| bad())?;
+        Shard::new(index, count).map_err(|_| bad())
+    }
+}
+
+impl std::fmt::Display for Shard {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        write!(f, "{}/{}", self.index, self.count)
+    }
+}
+
 /// A row of a study that knows its index.
 pub trait Indexed {
     /// The row's index in the whole study.

@@ -74,3 +74,34 @@ fn sweep_is_bitwise_the_same_on_one_and_two_threads_and_in_four_shards() {
     assert_eq!(exact(&merge_sweeps(&parts).unwrap()), exact(&one));
     assert!(one.rows.iter().all(|r| r.error.is_none()), "{:?}", one.rows);
 }
+
+#[test]
+fn shards_parse_from_i_of_n_text() {
+    let shard: Shard = "2/4".parse().unwrap();
+    assert_eq!(shard, Shard::new(2, 4).unwrap());
+    assert_eq!(shard.to_string(), "2/4");
+    assert_eq!(shard.indices(11), vec![2, 6, 10]);
+    for bad in ["4/4", "1/0", "x/2", "3"] {
+        assert!(matches!(bad.parse::<Shard>(), Err(StudyError::InvalidSpec { .. })), "{bad}");
+    }
+}
+
+#[test]
+fn a_case_survives_a_json_round_trip_and_flies_the_same() {
+    let case = design_case();
+    let back: StudyCase = serde_json::from_str(&exact(&case)).unwrap();
+    assert_eq!(exact(&back.run().unwrap()), exact(&case.run().unwrap()));
+}
+
+#[test]
+fn cancelling_from_the_progress_callback_stops_a_dispersion_between_flights() {
+    let cancel = std::sync::atomic::AtomicBool::new(false);
+    let stop_after_three = |done: usize, _total: usize| {
+        if done >= 3 {
+            cancel.store(true, std::sync::atomic::Ordering::Relaxed);
+        }
+    };
+    let control = StudyControl::none().with_cancel(&cancel).with_progress(&stop_after_three);
+    let err = pool(1).install(|| run_dispersion(&demo_case(), &scatter_spec(50), Shard::whole(), control)).unwrap_err();
+    assert_eq!(err, StudyError::Cancelled { done: 3, total: 50 });
+}
