@@ -86,8 +86,10 @@ impl DiscState {
     /// point lies R·sin(tilt) below the centre). The rim's own thickness and the offset between
     /// the centre of mass and the rim plane are neglected.
     pub fn lowest_rim_height_m(&self, radius_m: f64) -> f64 {
-        // √(n_x² + n_y²) rather than √(1 − n_z²): exact for a level disc, no cancellation
-        self.position_m.z - radius_m * self.normal.x.hypot(self.normal.y) / self.normal.norm()
+        // √(n_x² + n_y²) rather than √(1 − n_z²): exact for a level disc, no cancellation; one
+        // square root of the ratio to |n|² (|n| stays far from overflow and underflow)
+        let n = &self.normal;
+        self.position_m.z - radius_m * ((n.x * n.x + n.y * n.y) / n.norm_squared()).sqrt()
     }
 
     /// True when every component is finite.
