@@ -24,8 +24,10 @@ pub struct FlightSample {
     /// Angle of attack in rad against the air-relative velocity, positive with air on the
     /// underside (same definition as [`crate::AeroInput`]).
     pub angle_of_attack_rad: f64,
-    /// Wobble angle in rad: the angle between **n** and the angular momentum's line
-    /// (the nutation cone's half-angle; 0 for a clean spin).
+    /// Wobble angle in rad: the angle between **n** and the line of the angular momentum **H**
+    /// about the centre of mass (the nutation cone's half-angle; 0 for a clean spin), not the
+    /// angle to a running mean of **n**. Without torque it is constant, tan θ = I_x |ω⊥| /
+    /// (I_z |ω_s|) (see [`super::wobble_rate_for_angle`]); in air the damping terms shrink it.
     pub wobble_rad: f64,
 }
 
