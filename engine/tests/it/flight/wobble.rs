@@ -50,6 +50,7 @@ fn released_wobble_nutates_at_the_torque_free_textbook_rate() {
         let measured = measured_cone_rate(&flight, &h);
         let textbook = body.spin_inertia_kg_m2 * spin / (body.transverse_inertia_kg_m2 * theta.cos());
         assert!(rel_diff(measured, textbook) < 0.005, "{measured} vs {textbook} rad/s");
+        eprintln!("nutation: measured {measured:.4} rad/s, textbook {textbook:.4} rad/s ({:.1e} relative)", rel_diff(measured, textbook));
         // without air the wobble never decays, so it never halves
         assert_eq!(flight.metrics.wobble_half_time_s, None);
     }
