@@ -11,6 +11,7 @@ mod materials;
 mod outlines;
 mod pause;
 mod show;
+mod studies;
 mod tables;
 mod throws;
 
@@ -48,6 +49,7 @@ pub(crate) fn register_packages(reg: &mut Registrar, context: &PackageContext) {
     flights::register(reg);
     tables::register(reg);
     charts::register(reg);
+    studies::register(reg, context);
     show::register(reg, context);
     pause::register(reg, context);
     crate::files::register(reg, context.study_dir.clone());
@@ -64,6 +66,9 @@ pub(crate) fn render_domain(value: &Dynamic) -> Option<MimeBundle> {
     }
     if let Some(chart) = value.read_lock::<charts::ChartValue>() {
         return Some(chart.bundle.clone());
+    }
+    if let Some(study) = value.read_lock::<studies::StudyValue>() {
+        return Some(study.render());
     }
     if let Some(flight) = value.read_lock::<flights::FlightValue>() {
         return Some(compare::flight_table(std::slice::from_ref(&*flight)).render());

@@ -3,3 +3,4 @@ mod bad_scripts;
 mod display;
 mod packages;
 mod session;
+mod studies;

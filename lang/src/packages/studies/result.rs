@@ -1,0 +1,84 @@
+//! The `Study` value: a table of results, a chart and notes, shown together.
+use crate::help::{FnDoc, Registrar};
+use crate::output::MimeBundle;
+use crate::packages::charts::ChartValue;
+use crate::{Cell, Render, Table};
+use rhai::{Array, Dynamic, Map};
+
+/// A study's result as scripts hold it: its table (rows readable) and its chart.
+#[derive(Debug, Clone)]
+pub(crate) struct StudyValue {
+    /// The results, with units in the column headers.
+    pub table: Table,
+    /// The chart's rendering (SVG and a text summary).
+    pub chart: MimeBundle,
+}
+
+impl StudyValue {
+    /// A result from its table and chart.
+    pub fn new(table: Table, chart: &impl Render) -> Self {
+        Self { table, chart: chart.render() }
+    }
+
+    /// Table and chart in one display: the table's text and HTML, the chart's SVG below it.
+    pub fn render(&self) -> MimeBundle {
+        let table = self.table.render();
+        let svg = self.chart.data.get("image/svg+xml").cloned().unwrap_or_default();
+        let text = format!("{}\n{}", table.text_plain().unwrap_or_default(), self.chart.text_plain().unwrap_or_default());
+        let html = format!("{}\n<div class=\"spinfoil-chart\">{svg}</div>", table.data.get("text/html").cloned().unwrap_or_default());
+        MimeBundle::plain(text).with("text/html", html)
+    }
+
+    /// The rows as maps keyed by `column_unit` (e.g. `carry_m`).
+    pub fn rows(&self) -> Array {
+        let keys: Vec<String> = self.table.columns.iter().map(|c| row_key(&c.name, &c.unit)).collect();
+        self.table
+            .rows
+            .iter()
+            .map(|row| {
+                let map: Map = keys
+                    .iter()
+                    .zip(row)
+                    .map(|(k, cell)| {
+                        let value = match cell {
+                            Cell::Number(x) => Dynamic::from_float(*x),
+                            Cell::Text(t) => Dynamic::from(t.clone()),
+                            Cell::Empty => Dynamic::UNIT,
+                        };
+                        (k.as_str().into(), value)
+                    })
+                    .collect();
+                Dynamic::from_map(map)
+            })
+            .collect()
+    }
+}
+
+/// A column's key in row maps: its name in snake case, then its unit in words (`carry_m`).
+pub(crate) fn row_key(name: &str, unit: &str) -> String {
+    let unit = match unit {
+        "" | "1" => String::new(),
+        "m/s" => "mps".into(),
+        "°" => "deg".into(),
+        "%" => "pct".into(),
+        "rev/s" => "rps".into(),
+        u => u.replace(['/', '·', ' '], "_"),
+    };
+    let name: String = name.chars().map(|c| if c.is_alphanumeric() { c.to_ascii_lowercase() } else { '_' }).collect();
+    if name.ends_with(&format!("_{unit}")) || unit.is_empty() { name } else { format!("{name}_{unit}") }
+}
+
+/// Registers the `Study` type and its fields.
+pub(crate) fn register(reg: &mut Registrar) {
+    reg.engine.register_type_with_name::<StudyValue>("Study");
+    reg.getter("Study", "rows", "the result rows as maps keyed by column and unit (e.g. carry_m)", |s: &mut StudyValue| s.rows());
+    reg.getter("Study", "table", "the result table", |s: &mut StudyValue| s.table.clone());
+    reg.getter("Study", "chart", "the study's chart", |s: &mut StudyValue| ChartValue { bundle: s.chart.clone() });
+    reg.engine.register_fn("to_csv", |s: &mut StudyValue| s.table.to_csv());
+    reg.doc(FnDoc::new(
+        "to_csv(study: Study) -> string",
+        "The study's result table as CSV text (headers carry units).",
+        "save_text(sweep(d, t, environment(), #{ input: \"throw.speed_mps\", from: 16, to: 28, count: 4 }).to_csv(), \"sweep.csv\");",
+    ));
+    reg.text(|s: &mut StudyValue| s.render().text_plain().unwrap_or_default().to_string());
+}
