@@ -28,6 +28,8 @@ pub enum Command {
     Run(RunArgs),
     /// Execute a notebook without Jupyter; write the executed .ipynb and an HTML report.
     Report(ReportArgs),
+    /// Merge the partial results of a script run in shards (`run --shard i/N`) into full results.
+    Merge(MergeArgs),
     /// Install the Jupyter kernelspec for this binary (with its logo).
     InstallKernel(InstallArgs),
     /// Start the Jupyter kernel (Jupyter calls this with a connection file).
@@ -52,6 +54,23 @@ pub struct RunArgs {
     #[arg(long, default_value = "spinfoil-out")]
     pub out: PathBuf,
     /// Also save every table shown, as CSV or JSON files.
+    #[arg(long, value_enum)]
+    pub tables: Option<TableFormat>,
+    /// Run only shard i of N (0-based) of every sweep and dispersion, writing partial results
+    /// (partial-*.json) into the output folder; merge them with `spinfoil merge`.
+    #[arg(long, value_name = "i/N", value_parser = parse_shard)]
+    pub shard: Option<spinfoil_engine::Shard>,
+}
+
+/// `spinfoil merge`.
+#[derive(Args, Debug)]
+pub struct MergeArgs {
+    /// The folder holding the partial-*.json files of all shards.
+    pub folder: PathBuf,
+    /// Folder for the merged charts, tables and the merging script.
+    #[arg(long, default_value = "spinfoil-out")]
+    pub out: PathBuf,
+    /// Also save every merged table, as CSV or JSON files.
     #[arg(long, value_enum)]
     pub tables: Option<TableFormat>,
 }
@@ -91,4 +110,9 @@ pub struct InstallArgs {
     /// Into PREFIX/share/jupyter/kernels.
     #[arg(long, value_name = "PREFIX")]
     pub prefix: Option<PathBuf>,
+}
+
+/// `--shard i/N`: 0-based shard i of N.
+fn parse_shard(text: &str) -> Result<spinfoil_engine::Shard, String> {
+    text.parse().map_err(|e: spinfoil_engine::StudyError| e.to_string())
 }

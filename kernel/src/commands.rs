@@ -1,5 +1,5 @@
 //! Each subcommand, calling the library and reporting in the terminal.
-use crate::cli::{Command, InstallArgs, ReportArgs, RunArgs, TableFormat};
+use crate::cli::{Command, InstallArgs, MergeArgs, ReportArgs, RunArgs, TableFormat};
 use anyhow::Context;
 use spinfoil_kernel::kernelspec::{install, InstallTarget};
 use spinfoil_kernel::notebook::{html_report, run_notebook, Notebook, RunSettings};
@@ -20,6 +20,7 @@ pub fn dispatch(command: Command) -> anyhow::Result<Outcome> {
     match command {
         Command::Run(args) => run(args),
         Command::Report(args) => report(args),
+        Command::Merge(args) => merge(args),
         Command::InstallKernel(args) => install_kernel(args),
         Command::Kernel { connection_file } => {
             spinfoil_kernel::jupyter::run_kernel(&connection_file).context("the kernel stopped")?;
@@ -32,18 +33,44 @@ pub fn dispatch(command: Command) -> anyhow::Result<Outcome> {
     }
 }
 
-fn run(args: RunArgs) -> anyhow::Result<Outcome> {
-    let export = args.tables.map(|format| match format {
+/// Environment variables through which the study functions learn their shard and its folder
+/// (read in `lang/src/packages/studies/shards.rs`).
+const SHARD_VAR: &str = "SPINFOIL_SHARD";
+const SHARD_DIR_VAR: &str = "SPINFOIL_SHARD_DIR";
+
+fn table_export(tables: Option<TableFormat>) -> Option<TableExport> {
+    tables.map(|format| match format {
         TableFormat::Csv => TableExport::Csv,
         TableFormat::Json => TableExport::Json,
-    });
-    let outcome = run_script(&args.script, &ScriptSettings { out_dir: args.out, export })?;
+    })
+}
+
+fn run(args: RunArgs) -> anyhow::Result<Outcome> {
+    if let Some(shard) = &args.shard {
+        std::env::set_var(SHARD_VAR, shard.to_string());
+        std::env::set_var(SHARD_DIR_VAR, &args.out);
+    }
+    run_and_report(&args.script, args.out, args.tables)
+}
+
+/// Writes OUT/merge.rhai (which shows every merged study) and runs it on FOLDER's partial files.
+fn merge(args: MergeArgs) -> anyhow::Result<Outcome> {
+    std::fs::create_dir_all(&args.out).with_context(|| format!("cannot create {}", args.out.display()))?;
+    let script = args.out.join("merge.rhai");
+    let code = "// Merges the partial results of a sharded run (spinfoil merge).\nfor study in merge_shards() { show(study); }\n";
+    std::fs::write(&script, code).with_context(|| format!("cannot write {}", script.display()))?;
+    std::env::set_var(SHARD_DIR_VAR, &args.folder);
+    run_and_report(&script, args.out, args.tables)
+}
+
+fn run_and_report(script: &std::path::Path, out: PathBuf, tables: Option<TableFormat>) -> anyhow::Result<Outcome> {
+    let outcome = run_script(script, &ScriptSettings { out_dir: out, export: table_export(tables) })?;
     if outcome.write_failures > 0 {
         anyhow::bail!("{} output file(s) could not be written", outcome.write_failures);
     }
     match outcome.error {
         Some(report) => {
-            eprintln!("{}\n  in {}", report.text(), args.script.display());
+            eprintln!("{}\n  in {}", report.text(), script.display());
             Ok(Outcome::StudyFailed)
         }
         None => Ok(Outcome::Done),

@@ -130,7 +130,7 @@ fn signatures_compare_designs_and_match_the_battery_flights() {
     let signature = number(&mut s, "r.rows[0].carry_at_24_m");
     assert!((carry - signature).abs() < 1e-6 * carry, "{carry} vs {signature}");
     let chart = svg(&mut s, "r");
-    for label in ["P-7 one-piece", "P-7 rim-heavy", "release speed", "toward the fade side"] {
+    for label in ["P-7 one-piece", "P-7 rim-heavy", "release speed", "fade side positive"] {
         assert!(chart.contains(label), "signature chart lacks {label}");
     }
     assert_eq!(number(&mut s, "signature(one_piece).rows.len()"), 1.0);

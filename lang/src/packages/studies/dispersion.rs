@@ -3,6 +3,7 @@
 use super::case::{input_name, study_case};
 use super::control::watched;
 use super::result::StudyValue;
+use super::shards::{current_shard, keep, next_ordinal, Partial};
 use crate::help::{FnDoc, Registrar};
 use crate::options::OptionSpec;
 use crate::packages::args::{number_arg, options, value_error, Fallible};
@@ -10,7 +11,7 @@ use crate::packages::{DiscValue, EnvironmentValue, PackageContext, ThrowValue};
 use crate::{Axis, Cell, ScatterEllipses, Series, Table};
 use rhai::{Dynamic, Map, NativeCallContext};
 use spinfoil_engine::{
-    input_unit, run_dispersion, DispersionResult, DispersionSpec, Scatter, ScatterStats, Shard, Spread, StudyCase, Zone,
+    input_unit, run_dispersion, DispersionResult, DispersionSpec, Scatter, ScatterStats, Spread, StudyCase, Zone,
 };
 
 /// A spread as scripts write it: the engine's zero-mean spread and a shift of the mean.
@@ -100,7 +101,13 @@ fn dispersion(
         gust_intensity: opts.number("gust_intensity"),
         zones,
     };
-    let result = watched(ctx, context, "dispersion", spec.throws, |control| run_dispersion(&case, &spec, Shard::whole(), control))?;
+    let shard = current_shard(ctx)?;
+    let total = shard.indices(spec.throws).len();
+    let result = watched(ctx, context, "dispersion", total, |control| run_dispersion(&case, &spec, shard, control))?;
+    if shard.count > 1 {
+        let partial = Partial::Dispersion { ordinal: next_ordinal(), design: disc.design.name.clone(), result: result.clone() };
+        keep(ctx, &partial, shard)?;
+    }
     Ok(dispersion_value(&result, &disc.design.name))
 }
 
@@ -136,6 +143,9 @@ pub(crate) fn dispersion_value(result: &DispersionResult, design: &str) -> Study
     let mut add = |name: &str, value: f64, unit: &str| {
         table = std::mem::take(&mut table).row(vec![Cell::from(name), Cell::Number(value), Cell::from(unit)]);
     };
+    if result.summary.is_none() {
+        add(&format!("throws in shard {}", result.shard), result.rows.len() as f64, "");
+    }
     if let Some(summary) = &result.summary {
         add("throws flown", summary.flown as f64, "");
         add("throws failed", summary.failed as f64, "");

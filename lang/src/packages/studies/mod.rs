@@ -6,6 +6,7 @@ mod dispersion;
 mod optimum;
 mod options;
 mod result;
+mod shards;
 mod signature;
 mod sweep;
 
@@ -25,6 +26,7 @@ pub(crate) fn register(reg: &mut Registrar, context: &PackageContext) {
     dispersion::register(reg, context);
     signature::register(reg, context);
     optimum::register(reg, context);
+    shards::register(reg);
 }
 
 /// A study over one disc, throw and environment with an option map.

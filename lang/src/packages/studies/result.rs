@@ -20,13 +20,17 @@ impl StudyValue {
         Self { table, chart: chart.render() }
     }
 
-    /// Table and chart in one display: the table's text and HTML, the chart's SVG below it.
+    /// Table and chart in one display: the table's text, HTML and JSON, the chart's SVG inline
+    /// in the HTML below the table (notebooks show both; terminals print the table).
     pub fn render(&self) -> MimeBundle {
         let table = self.table.render();
         let svg = self.chart.data.get("image/svg+xml").cloned().unwrap_or_default();
         let text = format!("{}\n{}", table.text_plain().unwrap_or_default(), self.chart.text_plain().unwrap_or_default());
         let html = format!("{}\n<div class=\"spinfoil-chart\">{svg}</div>", table.data.get("text/html").cloned().unwrap_or_default());
-        MimeBundle::plain(text).with("text/html", html)
+        // No image/svg+xml part: a terminal would then print only the title; `show(study.chart)`
+        // saves the chart there. The JSON part lets the terminal export the table.
+        let json = table.data.get("application/json").cloned().unwrap_or_default();
+        MimeBundle::plain(text).with("text/html", html).with("application/json", json)
     }
 
     /// The rows as maps keyed by `column_unit` (e.g. `carry_m`).

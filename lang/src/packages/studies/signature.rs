@@ -56,13 +56,13 @@ pub(crate) fn signature_value(signatures: &[(String, FlightSignature)]) -> Study
         row.extend(sig.scales.iter().map(|s| Cell::Number(s.value)));
         table = table.row(row);
     }
-    for (name, _, meaning) in SIGNATURE_SCALES {
-        table = table.note(format!("{}: {meaning}", plain_name(name)));
+    for (_, _, meaning) in SIGNATURE_SCALES {
+        table = table.note(meaning);
     }
     let mut chart = LineChart::new(
         "Fade against release speed",
         Axis::new("release speed", "m/s"),
-        Axis::new("landing offset toward the fade side", "m"),
+        Axis::new("landing offset, fade side positive", "m"),
     );
     chart.subtitle = Some("Signature battery: flat backhand, launch 10°, ωR/V = 0.5, calm standard air".into());
     chart.zero_line = true;

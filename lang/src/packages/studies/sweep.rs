@@ -3,13 +3,14 @@ use super::case::{input_name, study_case};
 use super::control::watched;
 use super::options::{lists_only, number_list, take_list, text_list};
 use super::result::StudyValue;
+use super::shards::{current_shard, keep, next_ordinal, Partial};
 use crate::help::{FnDoc, Registrar};
 use crate::options::{OptionKind, OptionSpec, OptionValues};
 use crate::packages::args::{options, value_error, Fallible};
 use crate::packages::{DiscValue, EnvironmentValue, PackageContext, ThrowValue};
 use crate::{Axis, Cell, HeatMap, LineChart, Series, Table};
 use rhai::{Map, NativeCallContext};
-use spinfoil_engine::{input_unit, metric_unit, run_sweep, Shard, SweepAxis, SweepResult, SweepSpec};
+use spinfoil_engine::{input_unit, metric_unit, run_sweep, SweepAxis, SweepResult, SweepSpec};
 
 const REQUIRED_TEXT: OptionKind = OptionKind::Text;
 
@@ -63,7 +64,13 @@ fn sweep(
     }
     let spec = SweepSpec { axes, metrics };
     let case = study_case(disc, throw, env).map_err(|e| value_error(ctx, e))?;
-    let result = watched(ctx, context, "sweep", spec.total(), |control| run_sweep(&case, &spec, Shard::whole(), control))?;
+    let shard = current_shard(ctx)?;
+    let total = shard.indices(spec.total()).len();
+    let result = watched(ctx, context, "sweep", total, |control| run_sweep(&case, &spec, shard, control))?;
+    if shard.count > 1 {
+        let partial = Partial::Sweep { ordinal: next_ordinal(), design: disc.design.name.clone(), result: result.clone() };
+        keep(ctx, &partial, shard)?;
+    }
     Ok(sweep_value(&result, &disc.design.name))
 }
 
