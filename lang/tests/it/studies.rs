@@ -184,3 +184,52 @@ fn an_interrupt_stops_a_large_dispersion_within_a_second() {
     assert!(stopped.duration_since(asked) < Duration::from_secs(3));
     assert_eq!(value(&mut s, "sweep(one_piece, t, day, #{ input: \"speed_mps\", values: [20] }).rows.len()"), "1");
 }
+
+/// Measured flights made by flying the disc in thin air (2000 m): a script builds the CSV.
+const MEASURED: &str = r#"
+let thin = environment(#{ altitude_m: 2000 });
+let csv = "flight,speed_mps,spin_rps,launch_deg,nose_deg,hyzer_deg,t_s,x_m,y_m,z_m\n";
+for speed in [18, 24] {
+    let f = fly(one_piece, throw_release(#{ speed_mps: speed, spin_rps: 15, launch_deg: 10 }), thin);
+    let tr = f.trajectory();
+    let ts = tr.column("time");
+    let xs = tr.column("x");
+    let ys = tr.column("y");
+    let zs = tr.column("z");
+    let n = ts.len();
+    for k in 1..8 {
+        let i = k * (n - 1) / 8;
+        csv += `S${speed},${speed},15,10,0,0,${ts[i]},${xs[i]},${ys[i]},${zs[i]}` + "\n";
+    }
+}
+let m = measured_from_csv(csv);
+"#;
+
+#[test]
+fn calibration_recovers_the_density_ratio_as_force_scales() {
+    let mut s = session();
+    value(&mut s, MEASURED);
+    assert_eq!(number(&mut s, "m.count"), 2.0);
+    value(&mut s, "let r = calibrate(one_piece, environment(), m, #{ fit: [\"model.lift_scale\", \"model.drag_scale\", \"model.pitch_scale\"], position_sd_m: 0.05 });");
+    // Aerodynamic forces and moments scale with density, ½ρV²SC (common practice, no published
+    // source); ISA density at 2000 m over sea level: 1.0065 / 1.2250 = 0.8216 (ISO 2533:1975, table).
+    let ratio = 1.0065 / 1.2250;
+    for (k, name) in ["lift", "drag", "pitch"].iter().enumerate() {
+        let fitted = number(&mut s, &format!("r.rows[{k}].fitted"));
+        let se = number(&mut s, &format!("r.rows[{k}].standard_error"));
+        println!("{name} scale fitted {fitted:.4} ± {se:.4} (density ratio {ratio:.4})");
+        // Lift and drag within 1.5 %; the pitch scale also absorbs the roll and spin damping
+        // moments, which have no scale factor and also shrink with density (within 6 %).
+        let tolerance = if *name == "pitch" { 0.06 } else { 0.015 };
+        assert!((fitted - ratio).abs() < tolerance, "{name} scale {fitted} vs density ratio {ratio}");
+        assert!(se.is_finite() && se >= 0.0);
+    }
+    let chart = svg(&mut s, "r");
+    for label in ["S18 x", "S24 z", "time since release", "predicted − measured"] {
+        assert!(chart.contains(label), "residual chart lacks {label}");
+    }
+    let e = error(&mut s, "calibrate(one_piece, environment(), m, #{ fit: [\"model.lift_scale\", \"model.lift_at_zero\", \"model.lift_slope_per_rad\"] })");
+    assert!(e.message.contains("model.lift"), "unidentifiable coefficient named: {}", e.message);
+    let e = error(&mut s, "measured_from_csv(\"flight,speed_mps\\nA,20\")");
+    assert!(e.message.contains("line") || e.message.contains("column"), "{}", e.message);
+}

@@ -105,7 +105,7 @@ fn dispersion(
     let total = shard.indices(spec.throws).len();
     let result = watched(ctx, context, "dispersion", total, |control| run_dispersion(&case, &spec, shard, control))?;
     if shard.count > 1 {
-        let partial = Partial::Dispersion { ordinal: next_ordinal(), design: disc.design.name.clone(), result: result.clone() };
+        let partial = Partial::Dispersion { ordinal: next_ordinal(), design: disc.design.name.clone(), result: Box::new(result.clone()) };
         keep(ctx, &partial, shard)?;
     }
     Ok(dispersion_value(&result, &disc.design.name))

@@ -1,6 +1,7 @@
 //! Studies in scripts: sweeps, dispersion, flight signatures and release optimisation over the
 //! engine's `study` module, with tables, charts, progress displays and interrupts.
 mod case;
+mod calibration;
 mod control;
 mod dispersion;
 mod optimum;
@@ -23,6 +24,7 @@ pub(crate) fn register(reg: &mut Registrar, context: &PackageContext) {
     );
     result::register(reg);
     sweep::register(reg, context);
+    calibration::register(reg, context);
     dispersion::register(reg, context);
     signature::register(reg, context);
     optimum::register(reg, context);

@@ -40,7 +40,7 @@ pub(crate) enum Partial {
         /// The disc's name.
         design: String,
         /// The engine's partial result.
-        result: DispersionResult,
+        result: Box<DispersionResult>,
     },
 }
 
@@ -120,7 +120,7 @@ fn merge_group(ctx: &NativeCallContext, parts: Vec<Partial>) -> Fallible<StudyVa
         }
         Partial::Dispersion { design, .. } => {
             let results: Vec<DispersionResult> =
-                parts.iter().filter_map(|p| if let Partial::Dispersion { result, .. } = p { Some(result.clone()) } else { None }).collect();
+                parts.iter().filter_map(|p| if let Partial::Dispersion { result, .. } = p { Some((**result).clone()) } else { None }).collect();
             Ok(dispersion_value(&merge_dispersions(&results).map_err(merge_error)?, design))
         }
     }
