@@ -49,7 +49,7 @@ fn a_sweep_equals_single_flights_at_its_points() {
     let csv = value(&mut s, "r.to_csv()");
     assert!(csv.lines().count() == 4 && csv.contains("carry"), "{csv}");
     let chart = svg(&mut s, "r");
-    for label in ["throw.speed", "m/s", "carry", "turn", "fade", "Sweep of P-7 one-piece"] {
+    for label in ["release speed", "m/s", "carry", "turn", "fade", "Sweep of P-7 one-piece"] {
         assert!(chart.contains(label), "line chart lacks {label}");
     }
 }
@@ -61,7 +61,7 @@ fn a_two_way_sweep_with_listed_values_draws_a_heat_map() {
     assert_eq!(number(&mut s, "r.rows.len()"), 6.0);
     assert_eq!(number(&mut s, "r.rows[5].throw_hyzer_deg"), 10.0);
     let chart = svg(&mut s, "r");
-    for label in ["throw.launch", "throw.hyzer", "carry", "Two-way sweep"] {
+    for label in ["launch angle", "roll: positive hyzer", "carry", "Two-way sweep"] {
         assert!(chart.contains(label), "heat map lacks {label}");
     }
 }
@@ -232,4 +232,13 @@ fn calibration_recovers_the_density_ratio_as_force_scales() {
     assert!(e.message.contains("model.lift"), "unidentifiable coefficient named: {}", e.message);
     let e = error(&mut s, "measured_from_csv(\"flight,speed_mps\\nA,20\")");
     assert!(e.message.contains("line") || e.message.contains("column"), "{}", e.message);
+}
+
+#[test]
+fn the_catalogues_list_inputs_and_metrics_with_units() {
+    let mut s = session();
+    let inputs = value(&mut s, "study_inputs().to_csv()");
+    assert!(inputs.contains("throw.speed_mps,m/s,release speed"), "{inputs}");
+    let metrics = value(&mut s, "study_metrics().to_csv()");
+    assert!(metrics.contains("carry_m,m,"), "{metrics}");
 }

@@ -23,6 +23,7 @@ pub(crate) fn register(reg: &mut Registrar, context: &PackageContext) {
         "sweeps, dispersion under throw scatter, flight signatures and release optimisation (progress shown, interrupts obeyed)",
     );
     result::register(reg);
+    result::register_catalogues(reg);
     sweep::register(reg, context);
     calibration::register(reg, context);
     dispersion::register(reg, context);

@@ -86,3 +86,25 @@ pub(crate) fn register(reg: &mut Registrar) {
     ));
     reg.text(|s: &mut StudyValue| s.render().text_plain().unwrap_or_default().to_string());
 }
+
+/// Registers `study_inputs` and `study_metrics`: what studies can vary and report.
+pub(crate) fn register_catalogues(reg: &mut Registrar) {
+    reg.engine.register_fn("study_inputs", || catalogue("Study inputs", "input", spinfoil_engine::INPUTS));
+    reg.doc(FnDoc::new(
+        "study_inputs() -> Table",
+        "The inputs a sweep, dispersion, calibration or best_release can vary, with their units and meanings.",
+        "study_inputs()",
+    ));
+    reg.engine.register_fn("study_metrics", || catalogue("Study metrics", "metric", spinfoil_engine::METRICS));
+    reg.doc(FnDoc::new("study_metrics() -> Table", "The metrics a sweep can report, with their units and meanings.", "study_metrics()"));
+}
+
+fn catalogue(title: &str, what: &str, rows: &[(&str, &str, &str)]) -> Table {
+    let table = Table::new(title).column(what, "", 0).column("unit", "", 0).column("meaning", "", 0);
+    rows.iter().fold(table, |t, (name, unit, meaning)| t.row(vec![Cell::from(*name), Cell::from(*unit), Cell::from(*meaning)]))
+}
+
+/// The meaning of an input (`throw.speed_mps` → `release speed`), for chart axes.
+pub(crate) fn input_title(input: &str) -> String {
+    spinfoil_engine::INPUTS.iter().find(|(n, ..)| *n == input).map_or_else(|| input.to_string(), |(_, _, m)| m.to_string())
+}

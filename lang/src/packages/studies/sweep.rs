@@ -2,7 +2,7 @@
 use super::case::{input_name, study_case};
 use super::control::watched;
 use super::options::{lists_only, number_list, take_list, text_list};
-use super::result::StudyValue;
+use super::result::{input_title, StudyValue};
 use super::shards::{current_shard, keep, next_ordinal, Partial};
 use crate::help::{FnDoc, Registrar};
 use crate::options::{OptionKind, OptionSpec, OptionValues};
@@ -126,7 +126,7 @@ pub(crate) fn sweep_value(result: &SweepResult, design: &str) -> StudyValue {
 fn line_chart(result: &SweepResult, design: &str) -> LineChart {
     let spec = &result.spec;
     let unit = result.metric_units.first().cloned().unwrap_or_default();
-    let x = Axis::new(plain_name(&spec.axes[0].input), result.input_units[0].clone());
+    let x = Axis::new(input_title(&spec.axes[0].input), result.input_units[0].clone());
     let y_title = if result.metric_units.iter().all(|u| *u == unit) && spec.metrics.len() > 1 { "result".to_string() } else { plain_name(&spec.metrics[0]) };
     let mut chart = LineChart::new(format!("Sweep of {design}"), x, Axis::new(y_title, unit.clone()));
     chart.zero_line = true;
@@ -154,7 +154,7 @@ fn heat_map(result: &SweepResult, design: &str) -> HeatMap {
             grid[j][i] = *v;
         }
     }
-    let axis = |k: usize| Axis::new(plain_name(&spec.axes[k].input), result.input_units[k].clone());
+    let axis = |k: usize| Axis::new(input_title(&spec.axes[k].input), result.input_units[k].clone());
     let value = Axis::new(plain_name(&spec.metrics[0]), result.metric_units[0].clone());
     HeatMap::new(format!("Two-way sweep of {design}"), axis(0), axis(1), value).grid(xs, ys, grid)
 }
