@@ -97,7 +97,7 @@ pub(crate) fn calibration_value(result: &CalibrationResult, design: &str) -> Stu
         table = table.row(vec![Cell::from(p.name.as_str()), Cell::from(p.unit.as_str()), p.initial.into(), p.value.into(), p.standard_error.into()]);
     }
     let table = table
-        .note(format!("{} flights, {} iterations, residual variance s² = {:.3} (≈ 1 when the stated uncertainties are right)", result.flights_flown, result.iterations, result.residual_variance))
+        .note(format!("{} flights flown, {} iterations, residual variance s² = {:.3} (≈ 1 when the stated uncertainties are right)", result.flights_flown, result.iterations, result.residual_variance))
         .note("Standard errors from s²(JᵀJ)⁻¹ at the solution (linearised least squares).");
     let mut chart = LineChart::new(format!("Residuals of the calibration of {design}"), Axis::new("time since release", "s"), Axis::new("predicted − measured position", "m"));
     chart.zero_line = true;
