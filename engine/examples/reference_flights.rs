@@ -68,19 +68,8 @@ fn demo_driver_body() -> DiscBody {
 /// 22 m/s and 95 rad/s (about 15 rev/s), launch 10°, nose 1°, flat, from 1 m, calm sea-level
 /// air (lands after about 6.1 s, about 78 m out).
 pub fn typical_throw() -> ReferenceThrow {
-    let release = ReleaseState {
-        speed_mps: 22.0,
-        spin_rad_s: 95.0,
-        launch_rad: 10f64.to_radians(),
-        nose_rad: 1f64.to_radians(),
-        roll_rad: 0.0,
-        heading_rad: 0.0,
-        height_m: 1.0,
-        off_axis_rate_rad_s: 0.0,
-        off_axis_direction_rad: 0.0,
-        style: Style::Backhand,
-        hand: Hand::Right,
-    };
+    let release = ReleasePose { launch_rad: 10f64.to_radians(), nose_rad: 1f64.to_radians(), ..ReleasePose::default() }
+        .with_speed_and_spin(22.0, 95.0);
     ReferenceThrow { body: demo_driver_body(), model: demo_driver(), wind_mps: Vector3::zeros(), release }
 }
 

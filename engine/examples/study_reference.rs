@@ -14,19 +14,8 @@ use spinfoil_engine::*;
 /// 22 m/s and 95 rad/s, launch 10°, nose 1°, flat, from 1 m, calm sea-level air.
 pub fn bench_case() -> StudyCase {
     let body = DiscBody { mass_kg: 0.172, spin_inertia_kg_m2: 0.00142, transverse_inertia_kg_m2: 0.00075, diameter_m: 0.211 };
-    let release = ReleaseState {
-        speed_mps: 22.0,
-        spin_rad_s: 95.0,
-        launch_rad: 10f64.to_radians(),
-        nose_rad: 1f64.to_radians(),
-        roll_rad: 0.0,
-        heading_rad: 0.0,
-        height_m: 1.0,
-        off_axis_rate_rad_s: 0.0,
-        off_axis_direction_rad: 0.0,
-        style: Style::Backhand,
-        hand: Hand::Right,
-    };
+    let release = ReleasePose { launch_rad: 10f64.to_radians(), nose_rad: 1f64.to_radians(), ..ReleasePose::default() }
+        .with_speed_and_spin(22.0, 95.0);
     StudyCase::new(CaseDisc::Body { body }, CaseModel::linear(demo_driver()), release)
 }
 

@@ -19,7 +19,7 @@ use serde::{Deserialize, Serialize};
 
 use super::runner::run_indexed;
 use super::{NamedValue, StudyCase, StudyControl, StudyError};
-use crate::{fly, AeroInput, AeroModel, AirProperties, FlightConditions, Hand, ReleaseState, Style};
+use crate::{fly, AeroInput, AeroModel, AirProperties, FlightConditions, Hand, ReleasePose, ReleaseState, Style};
 
 /// Release speeds of the battery, m/s.
 pub const SIGNATURE_SPEEDS_MPS: [f64; 4] = [16.0, 20.0, 24.0, 28.0];
@@ -64,19 +64,8 @@ pub struct FlightSignature {
 
 /// The battery's release at `speed_mps` for a disc of diameter `diameter_m`.
 pub fn signature_release(speed_mps: f64, diameter_m: f64) -> ReleaseState {
-    ReleaseState {
-        speed_mps,
-        spin_rad_s: SIGNATURE_ADVANCE_RATIO * speed_mps / (0.5 * diameter_m),
-        launch_rad: 10f64.to_radians(),
-        nose_rad: 0.0,
-        roll_rad: 0.0,
-        heading_rad: 0.0,
-        height_m: 1.0,
-        off_axis_rate_rad_s: 0.0,
-        off_axis_direction_rad: 0.0,
-        style: Style::Backhand,
-        hand: Hand::Right,
-    }
+    let pose = ReleasePose { launch_rad: 10f64.to_radians(), height_m: 1.0, style: Style::Backhand, hand: Hand::Right, ..ReleasePose::default() };
+    pose.with_speed_and_spin(speed_mps, SIGNATURE_ADVANCE_RATIO * speed_mps / (0.5 * diameter_m))
 }
 
 /// Flies the battery with the case's disc and coefficient set.

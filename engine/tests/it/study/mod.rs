@@ -21,19 +21,7 @@ pub fn hummel_body() -> DiscBody {
 
 /// A right-hand backhand at `speed` m/s, 95 rad/s, launch 10°, nose 1°, flat, from 1 m.
 pub fn release(speed_mps: f64) -> ReleaseState {
-    ReleaseState {
-        speed_mps,
-        spin_rad_s: 95.0,
-        launch_rad: 10f64.to_radians(),
-        nose_rad: 1f64.to_radians(),
-        roll_rad: 0.0,
-        heading_rad: 0.0,
-        height_m: 1.0,
-        off_axis_rate_rad_s: 0.0,
-        off_axis_direction_rad: 0.0,
-        style: Style::Backhand,
-        hand: Hand::Right,
-    }
+    ReleasePose { launch_rad: 10f64.to_radians(), nose_rad: 1f64.to_radians(), ..ReleasePose::default() }.with_speed_and_spin(speed_mps, 95.0)
 }
 
 /// The demo driver thrown at 22 m/s in calm sea-level air.
