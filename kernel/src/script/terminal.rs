@@ -108,7 +108,12 @@ impl OutputSink for TerminalSink {
         let plain = bundle.text_plain().unwrap_or_default();
         if let Some(svg) = bundle.data.get("image/svg+xml") {
             if let Some(path) = self.write_file(format!("chart-{number:03}.svg"), svg) {
-                println!("{} (chart saved to {})", plain.lines().next().unwrap_or("chart"), path.display());
+                let mut lines = plain.lines();
+                println!("{} (chart saved to {})", lines.next().unwrap_or("chart"), path.display());
+                // The rest of the text form (summaries, notes, the safety caution) stays visible.
+                for line in lines {
+                    println!("{line}");
+                }
             }
             return;
         }

@@ -3,7 +3,8 @@
 use super::Table;
 
 impl Table {
-    /// The table as aligned text: title, header, a units row in brackets, a rule, the rows
+    /// The table as aligned text: title, header, a units row in brackets (left out when no
+    /// column has a unit), a rule, the rows
     /// (numbers right-aligned, text left-aligned) and the notes.
     pub fn to_text(&self) -> String {
         let header: Vec<String> = self.columns.iter().map(|c| c.name.clone()).collect();
@@ -12,7 +13,9 @@ impl Table {
         let widths = column_widths(&header, &units, &body);
         let mut lines = vec![self.title.clone()];
         lines.push(self.text_line(&header, &widths, false));
-        lines.push(self.text_line(&units, &widths, false));
+        if units.iter().any(|u| !u.is_empty()) {
+            lines.push(self.text_line(&units, &widths, false));
+        }
         lines.push(widths.iter().map(|w| "─".repeat(*w)).collect::<Vec<_>>().join("  "));
         lines.extend(body.iter().map(|row| self.text_line(row, &widths, true)));
         lines.extend(self.notes.iter().map(|note| format!("Note: {note}")));
