@@ -1,5 +1,7 @@
-//! Paths confined to the study's folder: relative, no `..`, no way out through symlinks.
+//! Paths confined to the study's folder (and extra read-only folders): relative, no `..`, no
+//! way out through symlinks.
 use std::path::{Component, Path, PathBuf};
+use std::sync::atomic::{AtomicUsize, Ordering};
 
 /// Why a path was refused or a file could not be used.
 #[derive(Debug, Clone, PartialEq, thiserror::Error)]
@@ -23,7 +25,7 @@ pub enum FileAccessError {
         allowed: String,
     },
     /// The path leads outside the study folder (through a symbolic link).
-    #[error("path \"{path}\" leads outside the study folder")]
+    #[error("path \"{path}\" leads outside the study folder (through a symbolic link); scripts may only use files inside it")]
     Outside {
         /// The path as given.
         path: String,
@@ -40,46 +42,75 @@ pub enum FileAccessError {
     },
 }
 
-/// The study folder and the checks every script path goes through.
+/// The study folder, the extra read-only folders, and the checks every script path goes through.
 #[derive(Debug, Clone, PartialEq)]
 pub struct StudyFolder {
-    root: PathBuf,
+    /// The study folder (canonical), if file access is on.
+    root: Option<PathBuf>,
+    /// Extra folders to read from (canonical), searched after the study folder.
+    extra: Vec<PathBuf>,
 }
 
 impl StudyFolder {
     /// The folder `dir` (canonicalised); `None` when file access is off.
     pub fn new(dir: Option<&Path>) -> Result<Self, FileAccessError> {
-        let dir = dir.ok_or(FileAccessError::NoStudyDir)?;
-        let root = dir.canonicalize().map_err(|e| io("opening the study folder", dir, &e))?;
-        Ok(Self { root })
+        Self::with_extra(dir, &[])
     }
 
-    /// The checked full path of `relative` for reading: it must exist inside the folder.
+    /// The study folder `dir` (read and write) and `extra` folders (read only). Fails when
+    /// there is no folder at all, or when one cannot be opened.
+    pub fn with_extra(dir: Option<&Path>, extra: &[PathBuf]) -> Result<Self, FileAccessError> {
+        if dir.is_none() && extra.is_empty() {
+            return Err(FileAccessError::NoStudyDir);
+        }
+        let open = |d: &Path| d.canonicalize().map_err(|e| io("opening the study folder", d, &e));
+        let root = dir.map(open).transpose()?;
+        let extra = extra.iter().map(|d| open(d)).collect::<Result<_, _>>()?;
+        Ok(Self { root, extra })
+    }
+
+    /// The checked full path of `relative` for reading: it must exist inside the study folder,
+    /// or else inside one of the extra folders (searched in order).
     pub fn for_reading(&self, relative: &str, extensions: &[&str]) -> Result<PathBuf, FileAccessError> {
-        let joined = self.root.join(checked_relative(relative, extensions)?);
-        let real = joined.canonicalize().map_err(|e| io("reading", Path::new(relative), &e))?;
-        self.inside(real, relative)
+        let path = checked_relative(relative, extensions)?;
+        let roots: Vec<&PathBuf> = self.root.iter().chain(&self.extra).collect();
+        for root in &roots {
+            let joined = root.join(path);
+            if std::fs::symlink_metadata(&joined).is_err() {
+                continue; // not in this folder: look in the next one
+            }
+            let real = joined.canonicalize().map_err(|e| io("reading", Path::new(relative), &e))?;
+            return inside(root, real, relative);
+        }
+        let first = roots.first().ok_or(FileAccessError::NoStudyDir)?;
+        let missing = first.join(path).canonicalize().err();
+        Err(missing.map_or(FileAccessError::NoStudyDir, |e| io("reading", Path::new(relative), &e)))
     }
 
     /// The checked full path of `relative` for writing: its folder must exist inside the study
-    /// folder, and an existing file there must not be a link to elsewhere.
+    /// folder, and an existing file there must not be a link to elsewhere. Extra folders are
+    /// never written to.
     pub fn for_writing(&self, relative: &str, extensions: &[&str]) -> Result<PathBuf, FileAccessError> {
-        let joined = self.root.join(checked_relative(relative, extensions)?);
-        let parent = joined.parent().unwrap_or(&self.root);
+        let root = self.root.as_ref().ok_or(FileAccessError::NoStudyDir)?;
+        let joined = root.join(checked_relative(relative, extensions)?);
+        let parent = joined.parent().unwrap_or(root);
         let real_parent = parent.canonicalize().map_err(|e| io("opening the folder of", Path::new(relative), &e))?;
-        self.inside(real_parent.clone(), relative)?;
+        inside(root, real_parent.clone(), relative)?;
         if let Ok(real) = joined.canonicalize() {
-            self.inside(real, relative)?;
+            inside(root, real, relative)?;
+        } else if std::fs::symlink_metadata(&joined).is_ok() {
+            // A link whose target does not exist: writing through it could create a file anywhere.
+            return Err(FileAccessError::Outside { path: relative.to_string() });
         }
         Ok(real_parent.join(joined.file_name().unwrap_or_default()))
     }
+}
 
-    fn inside(&self, real: PathBuf, relative: &str) -> Result<PathBuf, FileAccessError> {
-        if real.starts_with(&self.root) {
-            Ok(real)
-        } else {
-            Err(FileAccessError::Outside { path: relative.to_string() })
-        }
+fn inside(root: &Path, real: PathBuf, relative: &str) -> Result<PathBuf, FileAccessError> {
+    if real.starts_with(root) {
+        Ok(real)
+    } else {
+        Err(FileAccessError::Outside { path: relative.to_string() })
     }
 }
 
@@ -101,19 +132,59 @@ fn io(action: &'static str, path: &Path, err: &std::io::Error) -> FileAccessErro
     FileAccessError::Io { action, path: path.display().to_string(), reason: err.to_string() }
 }
 
-/// Writes `text` to `path` atomically: a temporary file in the same folder, then a rename.
+static NEXT_TEMP: AtomicUsize = AtomicUsize::new(0);
+
+/// Writes `text` to `path` atomically: a hidden temporary file in the same folder
+/// (`.NAME.PID-N.partial`, created new, never through a link), written and flushed to disk
+/// (fsync), then renamed over `path`, and the folder flushed. A process killed at any moment
+/// leaves `path` either old or new, never partly written; the temporary files that such
+/// processes left behind are removed by the next save of the same file.
 pub fn write_atomic(path: &Path, text: &str, shown: &str) -> Result<(), FileAccessError> {
     use std::io::Write;
     let name = path.file_name().and_then(|n| n.to_str()).unwrap_or("file");
-    let temp = path.with_file_name(format!(".{name}.{}.partial", std::process::id()));
-    let result = std::fs::File::create(&temp)
+    let pid = std::process::id();
+    let temp = path.with_file_name(format!(".{name}.{pid}-{}.partial", NEXT_TEMP.fetch_add(1, Ordering::Relaxed)));
+    let result = std::fs::OpenOptions::new()
+        .write(true)
+        .create_new(true)
+        .open(&temp)
         .and_then(|mut f| f.write_all(text.as_bytes()).and_then(|()| f.sync_all()))
         .and_then(|()| std::fs::rename(&temp, path));
     if let Err(e) = result {
         let _ = std::fs::remove_file(&temp);
         return Err(io("writing", Path::new(shown), &e));
     }
+    if let Some(folder) = path.parent() {
+        // Makes the rename itself durable; some systems refuse to sync a folder: no matter.
+        let _ = std::fs::File::open(folder).and_then(|f| f.sync_all());
+        remove_abandoned_temps(folder, name, pid);
+    }
     Ok(())
+}
+
+/// Removes `.NAME.PID-N.partial` files in `folder` left by processes that no longer run
+/// (known on Linux through /proc; elsewhere they stay, hidden and never loaded).
+fn remove_abandoned_temps(folder: &Path, name: &str, own_pid: u32) {
+    let prefix = format!(".{name}.");
+    let Ok(entries) = std::fs::read_dir(folder) else { return };
+    for entry in entries.flatten() {
+        let file = entry.file_name().to_string_lossy().into_owned();
+        let Some(pid) = file.strip_prefix(&prefix).and_then(|r| r.strip_suffix(".partial")).and_then(|r| r.split('-').next()) else {
+            continue;
+        };
+        let Ok(pid) = pid.parse::<u32>() else { continue };
+        if pid != own_pid && !process_runs(pid) {
+            let _ = std::fs::remove_file(entry.path());
+        }
+    }
+}
+
+fn process_runs(pid: u32) -> bool {
+    if cfg!(target_os = "linux") {
+        Path::new("/proc").join(pid.to_string()).exists()
+    } else {
+        true
+    }
 }
 
 /// Reads a text file.

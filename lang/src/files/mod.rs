@@ -4,4 +4,4 @@ mod design_file;
 mod package;
 
 pub use confine::{FileAccessError, StudyFolder};
-pub(crate) use package::register;
+pub(crate) use package::{read_confined, register};

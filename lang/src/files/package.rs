@@ -4,10 +4,9 @@ use super::design_file::{DesignFile, Format};
 use crate::errors::script_error;
 use crate::help::{FnDoc, Registrar};
 use crate::packages::{DiscValue, EnvironmentValue, FlightValue, ThrowValue};
+use crate::session::ScriptRules;
 use crate::Table;
 use rhai::{EvalAltResult, NativeCallContext};
-use std::path::PathBuf;
-use std::sync::Arc;
 
 type Fallible<T> = Result<T, Box<EvalAltResult>>;
 
@@ -18,29 +17,22 @@ fn file_error(ctx: &NativeCallContext, err: impl std::fmt::Display) -> Box<EvalA
     script_error("FileError", format!("{}: {err}", ctx.fn_name()), ctx.call_position())
 }
 
-/// Registers the save and load functions; they fail with a `FileError` when `study_dir` is None.
-pub(crate) fn register(reg: &mut Registrar, study_dir: Option<PathBuf>) {
+/// Registers the save and load functions. They use the folders of the session's
+/// [`ScriptRules`] and fail with a `FileError` when the session has none.
+pub(crate) fn register(reg: &mut Registrar) {
     reg.section("files", "saving and loading designs (JSON or TOML) and exports, inside the study's folder only");
-    let dir = Arc::new(study_dir);
-    register_save(reg, &dir);
-    register_load(reg, &dir);
-    let d = dir.clone();
-    reg.engine.register_fn("save_text", move |ctx: NativeCallContext, text: &str, path: &str| {
-        save_text(&ctx, &d, text, path)
-    });
+    register_save(reg);
+    register_load(reg);
+    reg.engine.register_fn("save_text", |ctx: NativeCallContext, text: &str, path: &str| save_text(&ctx, text, path));
     reg.doc(FnDoc::new(
         "save_text(text: string, path: string) -> string",
         "Writes text (a CSV or JSON export, an SVG chart) to a file in the study folder (.csv, .json, .txt, .md, .svg, .html); returns the path.",
         "save_text(compare_mass([a, b]).to_csv(), \"mass.csv\");",
     ));
-    let d = dir.clone();
-    reg.engine.register_fn("save_csv", move |ctx: NativeCallContext, f: FlightValue, path: &str| {
-        save_text(&ctx, &d, &crate::packages::trajectory_table(&f).to_csv(), path)
+    reg.engine.register_fn("save_csv", |ctx: NativeCallContext, f: FlightValue, path: &str| {
+        save_text(&ctx, &crate::packages::trajectory_table(&f).to_csv(), path)
     });
-    let d = dir.clone();
-    reg.engine.register_fn("save_csv", move |ctx: NativeCallContext, t: Table, path: &str| {
-        save_text(&ctx, &d, &t.to_csv(), path)
-    });
+    reg.engine.register_fn("save_csv", |ctx: NativeCallContext, t: Table, path: &str| save_text(&ctx, &t.to_csv(), path));
     reg.doc(FnDoc::new(
         "save_csv(result: Flight or Table, path: string) -> string",
         "Writes a flight's trajectory or a table as CSV (headers carry units) to a file in the study folder; returns the path.",
@@ -48,18 +40,15 @@ pub(crate) fn register(reg: &mut Registrar, study_dir: Option<PathBuf>) {
     ));
 }
 
-fn register_save(reg: &mut Registrar, dir: &Arc<Option<PathBuf>>) {
-    let d = dir.clone();
-    reg.engine.register_fn("save", move |ctx: NativeCallContext, x: DiscValue, path: &str| {
-        save_design(&ctx, &d, &DesignFile::of_disc(&x), path)
+fn register_save(reg: &mut Registrar) {
+    reg.engine.register_fn("save", |ctx: NativeCallContext, x: DiscValue, path: &str| {
+        save_design(&ctx, &DesignFile::of_disc(&x), path)
     });
-    let d = dir.clone();
-    reg.engine.register_fn("save", move |ctx: NativeCallContext, x: ThrowValue, path: &str| {
-        save_design(&ctx, &d, &DesignFile::Throw { throw: x }, path)
+    reg.engine.register_fn("save", |ctx: NativeCallContext, x: ThrowValue, path: &str| {
+        save_design(&ctx, &DesignFile::Throw { throw: x }, path)
     });
-    let d = dir.clone();
-    reg.engine.register_fn("save", move |ctx: NativeCallContext, x: EnvironmentValue, path: &str| {
-        save_design(&ctx, &d, &DesignFile::of_environment(&x), path)
+    reg.engine.register_fn("save", |ctx: NativeCallContext, x: EnvironmentValue, path: &str| {
+        save_design(&ctx, &DesignFile::of_environment(&x), path)
     });
     reg.doc(FnDoc::new(
         "save(design: Disc, Throw or Environment, path: string) -> string",
@@ -68,10 +57,9 @@ fn register_save(reg: &mut Registrar, dir: &Arc<Option<PathBuf>>) {
     ));
 }
 
-fn register_load(reg: &mut Registrar, dir: &Arc<Option<PathBuf>>) {
-    let d = dir.clone();
-    reg.engine.register_fn("load_disc", move |ctx: NativeCallContext, path: &str| {
-        match load(&ctx, &d, path, "disc")? {
+fn register_load(reg: &mut Registrar) {
+    reg.engine.register_fn("load_disc", |ctx: NativeCallContext, path: &str| {
+        match load(&ctx, path, "disc")? {
             DesignFile::Disc { design, aero } => {
                 DiscValue::evaluate(design, &aero).map_err(|e| file_error(&ctx, format!("\"{path}\": {e}")))
             }
@@ -83,9 +71,8 @@ fn register_load(reg: &mut Registrar, dir: &Arc<Option<PathBuf>>) {
         "Loads a disc saved with save (JSON or TOML) from the study folder and evaluates it again.",
         "let d = load_disc(\"designs/p7-rim-heavy.toml\");",
     ));
-    let d = dir.clone();
-    reg.engine.register_fn("load_throw", move |ctx: NativeCallContext, path: &str| {
-        match load(&ctx, &d, path, "throw")? {
+    reg.engine.register_fn("load_throw", |ctx: NativeCallContext, path: &str| {
+        match load(&ctx, path, "throw")? {
             DesignFile::Throw { throw } => Ok(throw),
             _ => unreachable_kind(&ctx),
         }
@@ -95,9 +82,8 @@ fn register_load(reg: &mut Registrar, dir: &Arc<Option<PathBuf>>) {
         "Loads a throw saved with save from the study folder.",
         "let t = load_throw(\"throws/long-hyzer.json\");",
     ));
-    let d = dir.clone();
-    reg.engine.register_fn("load_environment", move |ctx: NativeCallContext, path: &str| {
-        match load(&ctx, &d, path, "environment")? {
+    reg.engine.register_fn("load_environment", |ctx: NativeCallContext, path: &str| {
+        match load(&ctx, path, "environment")? {
             DesignFile::Environment { air, wind, ground } => EnvironmentValue::build(air, wind)
                 .map(|e| EnvironmentValue { ground, ..e })
                 .map_err(|e| file_error(&ctx, format!("\"{path}\": {e}"))),
@@ -115,20 +101,19 @@ fn unreachable_kind<T>(ctx: &NativeCallContext) -> Fallible<T> {
     Err(file_error(ctx, "the file holds another kind of design"))
 }
 
-fn folder(ctx: &NativeCallContext, dir: &Option<PathBuf>) -> Fallible<StudyFolder> {
-    StudyFolder::new(dir.as_deref()).map_err(|e| file_error(ctx, e))
+fn folder(ctx: &NativeCallContext) -> Fallible<StudyFolder> {
+    ScriptRules::of(ctx).folder().map_err(|e| file_error(ctx, e))
 }
 
-fn save_design(ctx: &NativeCallContext, dir: &Option<PathBuf>, file: &DesignFile, path: &str) -> Fallible<String> {
-    let full = folder(ctx, dir)?.for_writing(path, DESIGN_EXTENSIONS).map_err(|e| file_error(ctx, e))?;
+fn save_design(ctx: &NativeCallContext, file: &DesignFile, path: &str) -> Fallible<String> {
+    let full = folder(ctx)?.for_writing(path, DESIGN_EXTENSIONS).map_err(|e| file_error(ctx, e))?;
     let text = file.to_text(Format::of(path)).map_err(|e| file_error(ctx, e))?;
     write_atomic(&full, &text, path).map_err(|e| file_error(ctx, e))?;
     Ok(path.to_string())
 }
 
-fn load(ctx: &NativeCallContext, dir: &Option<PathBuf>, path: &str, kind: &str) -> Fallible<DesignFile> {
-    let full = folder(ctx, dir)?.for_reading(path, DESIGN_EXTENSIONS).map_err(|e| file_error(ctx, e))?;
-    let text = read_text(&full, path).map_err(|e| file_error(ctx, e))?;
+fn load(ctx: &NativeCallContext, path: &str, kind: &str) -> Fallible<DesignFile> {
+    let text = read_confined(ctx, path, DESIGN_EXTENSIONS)?;
     let file = DesignFile::from_text(&text, Format::of(path))
         .map_err(|e| file_error(ctx, format!("\"{path}\" is not a valid design file: {e}")))?;
     if file.kind() != kind {
@@ -137,8 +122,16 @@ fn load(ctx: &NativeCallContext, dir: &Option<PathBuf>, path: &str, kind: &str) 
     Ok(file)
 }
 
-fn save_text(ctx: &NativeCallContext, dir: &Option<PathBuf>, text: &str, path: &str) -> Fallible<String> {
-    let full = folder(ctx, dir)?.for_writing(path, TEXT_EXTENSIONS).map_err(|e| file_error(ctx, e))?;
+/// The text of the file at the script path `path` (one of `extensions`), read through the
+/// session's confinement (study folder, then extra folders); a `FileError` naming the path
+/// otherwise.
+pub(crate) fn read_confined(ctx: &NativeCallContext, path: &str, extensions: &[&str]) -> Fallible<String> {
+    let full = folder(ctx)?.for_reading(path, extensions).map_err(|e| file_error(ctx, e))?;
+    read_text(&full, path).map_err(|e| file_error(ctx, e))
+}
+
+fn save_text(ctx: &NativeCallContext, text: &str, path: &str) -> Fallible<String> {
+    let full = folder(ctx)?.for_writing(path, TEXT_EXTENSIONS).map_err(|e| file_error(ctx, e))?;
     write_atomic(&full, text, path).map_err(|e| file_error(ctx, e))?;
     Ok(path.to_string())
 }

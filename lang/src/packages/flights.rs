@@ -153,6 +153,7 @@ fn fly(
     throw: ThrowValue,
     environment: EnvironmentValue,
 ) -> Fallible<FlightValue> {
+    crate::session::check_trajectory_samples(&ctx, &FlightSettings::default())?;
     fly_disc(&disc, &throw, &environment).map_err(|e| engine_error(&ctx, e))
 }
 

@@ -24,18 +24,15 @@ use crate::help::Registrar;
 use crate::output::MimeBundle;
 use crate::session::{InterruptHandle, SinkSlot};
 use rhai::Dynamic;
-use std::path::PathBuf;
 
-/// What packages may use besides the engine: the current output sink, the interrupt flag and
-/// the study's folder.
+/// What packages may use besides the engine: the current output sink and the interrupt flag
+/// (the study's folders and limits are in the session's `ScriptRules`).
 #[derive(Clone)]
 pub(crate) struct PackageContext {
     /// Where `show` sends displays.
     pub sink: SinkSlot,
     /// Checked by calls that wait (`sleep`).
     pub interrupt: InterruptHandle,
-    /// The only folder scripts may read and write (None: no file access).
-    pub study_dir: Option<PathBuf>,
 }
 
 /// Registers every domain package, in reference-page order.
@@ -52,7 +49,7 @@ pub(crate) fn register_packages(reg: &mut Registrar, context: &PackageContext) {
     studies::register(reg, context);
     show::register(reg, context);
     pause::register(reg, context);
-    crate::files::register(reg, context.study_dir.clone());
+    crate::files::register(reg);
 }
 
 /// The rendering of a domain value, when `value` is one.

@@ -22,13 +22,13 @@ pub(crate) fn build_engine(
     apply_limits(&mut engine, settings);
     route_output(&mut engine, sink);
     let flag = interrupt.clone();
-    engine.on_progress(move |_| flag.is_interrupted().then(|| Dynamic::from("interrupted")));
+    engine.on_progress(move |operations| flag.stops_at(operations).then(|| Dynamic::from("interrupted")));
+    engine.set_default_tag(super::ScriptRules::of_settings(settings).to_tag());
     let mut docs = Docs::default();
     let docs_cell: Arc<OnceLock<Arc<Docs>>> = Arc::default();
     {
         let mut reg = Registrar::new(&mut engine, &mut docs);
-        let context =
-            PackageContext { sink: sink.clone(), interrupt: interrupt.clone(), study_dir: settings.study_dir.clone() };
+        let context = PackageContext { sink: sink.clone(), interrupt: interrupt.clone() };
         register_packages(&mut reg, &context);
         register_help(&mut reg, docs_cell.clone());
     }

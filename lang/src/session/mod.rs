@@ -5,6 +5,7 @@ mod engine;
 mod error;
 mod inspection;
 mod interrupt;
+mod limits;
 mod scan;
 mod settings;
 mod sink_slot;
@@ -14,6 +15,7 @@ pub use completion::Completions;
 pub use error::CellError;
 pub use interrupt::InterruptHandle;
 pub use settings::SessionSettings;
+pub(crate) use limits::{check_study_flights, check_trajectory_samples, ScriptRules};
 pub(crate) use sink_slot::SinkSlot;
 
 use crate::help::Docs;
@@ -47,9 +49,9 @@ impl Session {
     /// Evaluates one cell, sending prints and displays to `sink` as they happen; returns the
     /// rendering of the cell's last expression (None when it is unit).
     pub fn eval(&mut self, code: &str, sink: Arc<dyn OutputSink>) -> Result<Option<MimeBundle>, CellError> {
-        self.interrupt.clear();
+        self.interrupt.start_cell(self.settings.max_cell_time);
         self.sink.set(sink);
-        let result = self.run(code);
+        let result = self.run(code).map_err(|e| self.out_of_time(e));
         self.sink.clear();
         result
     }
@@ -63,6 +65,15 @@ impl Session {
             .eval_ast_with_scope(&mut self.scope, &merged)
             .map_err(|e| CellError::from_eval(&e, &self.settings, &self.docs))?;
         Ok((!value.is_unit()).then(|| crate::render::render_value(&value, &self.engine)))
+    }
+
+    /// `err` as a limit error when the cell was stopped because it ran out of wall time.
+    fn out_of_time(&self, err: CellError) -> CellError {
+        if err.kind == "Interrupted" && self.interrupt.timed_out() {
+            CellError { kind: "LimitError".into(), message: self.settings.wall_time_message(), ..err }
+        } else {
+            err
+        }
     }
 
     /// A handle that interrupts this session's running cell from any thread.

@@ -3,4 +3,5 @@ mod bad_scripts;
 mod display;
 mod packages;
 mod session;
+mod sandbox;
 mod studies;

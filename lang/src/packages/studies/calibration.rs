@@ -4,7 +4,6 @@ use super::control::watched;
 use super::options::{lists_only, take_list, text_list};
 use super::result::StudyValue;
 use super::sweep::plain_name;
-use crate::files::StudyFolder;
 use crate::help::{FnDoc, Registrar};
 use crate::options::OptionSpec;
 use crate::packages::args::{options, value_error, Fallible};
@@ -36,11 +35,8 @@ pub(crate) fn register(reg: &mut Registrar, context: &PackageContext) {
         "Measured flights from CSV text: a header naming the columns flight, speed_mps, spin_rps, launch_deg, nose_deg, hyzer_deg (heading_deg, height_m, style, hand optional), t_s, x_m, y_m and z_m (empty z_m: a landing point and time aloft). Rows with the same flight label belong to one flight. Errors name the line and column.",
         "let m = measured_from_csv(\"flight,speed_mps,spin_rps,launch_deg,nose_deg,hyzer_deg,t_s,x_m,y_m,z_m\\nA,22,15,10,0,0,3.9,71.2,-2.1,\");",
     ));
-    let dir = context.study_dir.clone();
-    reg.engine.register_fn("load_measured", move |ctx: NativeCallContext, path: &str| {
-        let folder = StudyFolder::new(dir.as_deref()).map_err(|e| value_error(&ctx, e.to_string()))?;
-        let full = folder.for_reading(path, &["csv"]).map_err(|e| value_error(&ctx, e.to_string()))?;
-        let text = std::fs::read_to_string(&full).map_err(|e| value_error(&ctx, format!("cannot read {path}: {e}")))?;
+    reg.engine.register_fn("load_measured", |ctx: NativeCallContext, path: &str| {
+        let text = crate::files::read_confined(&ctx, path, &["csv"])?;
         measured(&ctx, &text)
     });
     reg.doc(FnDoc::new(

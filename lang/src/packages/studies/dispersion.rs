@@ -103,6 +103,7 @@ fn dispersion(
     };
     let shard = current_shard(ctx)?;
     let total = shard.indices(spec.throws).len();
+    crate::session::check_study_flights(ctx, "a dispersion", total)?;
     let result = watched(ctx, context, "dispersion", total, |control| run_dispersion(&case, &spec, shard, control))?;
     if shard.count > 1 {
         let partial = Partial::Dispersion { ordinal: next_ordinal(), design: disc.design.name.clone(), result: Box::new(result.clone()) };

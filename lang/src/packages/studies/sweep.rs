@@ -66,6 +66,7 @@ fn sweep(
     let case = study_case(disc, throw, env).map_err(|e| value_error(ctx, e))?;
     let shard = current_shard(ctx)?;
     let total = shard.indices(spec.total()).len();
+    crate::session::check_study_flights(ctx, "a sweep", total)?;
     let result = watched(ctx, context, "sweep", total, |control| run_sweep(&case, &spec, shard, control))?;
     if shard.count > 1 {
         let partial = Partial::Sweep { ordinal: next_ordinal(), design: disc.design.name.clone(), result: result.clone() };
