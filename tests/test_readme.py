@@ -90,6 +90,17 @@ def test_physics_page_names_the_sources_the_code_cites():
         assert source in text, f"docs/physics.md does not mention {source}"
 
 
+def test_readme_script_excerpt_is_from_the_tour_script():
+    text = (REPO / "README.md").read_text()
+    excerpt = text[text.index("```rhai") + len("```rhai"):]
+    excerpt = excerpt[: excerpt.index("```")]
+    tour = (REPO / "docs" / "images" / "tour.rhai").read_text().splitlines()
+    lines = [line for line in excerpt.splitlines() if line.strip()]
+    assert lines, "the README shows no script excerpt"
+    missing = [line for line in lines if line not in tour]
+    assert not missing, f"README script lines not in docs/images/tour.rhai: {missing}"
+
+
 def test_tour_images_and_table_are_up_to_date():
     if not BINARY.exists():
         subprocess.run(["cargo", "build", "-q", "-p", "spinfoil-kernel"], cwd=REPO, check=True)
