@@ -5,15 +5,19 @@ pub mod connection;
 pub mod handlers;
 pub mod header;
 pub mod history;
+pub mod incident_log;
 pub mod iopub;
+pub mod limits;
 pub mod messages;
 mod server;
 pub mod signer;
 pub mod sockets;
+pub mod test_hooks;
 pub mod wire;
 pub mod worker;
 
 pub use connection::{ConnectionError, ConnectionInfo};
+pub use limits::KernelLimits;
 pub use signer::Signer;
 pub use wire::{WireError, WireMessage};
 

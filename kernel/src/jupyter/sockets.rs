@@ -1,5 +1,7 @@
 //! The five ZeroMQ sockets of a kernel (pure-Rust `zeromq` on tokio) and frame conversion.
 use super::connection::ConnectionInfo;
+use super::incident_log::{log_incident, Incident};
+use super::limits::KernelLimits;
 use super::signer::Signer;
 use super::wire::{WireError, WireMessage};
 use bytes::Bytes;
@@ -39,27 +41,48 @@ impl Sockets {
     }
 }
 
-/// Receives the next message that parses and verifies; bad ones are logged to stderr and dropped.
-pub async fn receive(socket: &mut impl SocketRecv, signer: &Signer) -> ZmqResult<WireMessage> {
+/// What a request socket accepts: its channel's name (for the log), the signing key and the
+/// size cap.
+#[derive(Clone)]
+pub struct Intake {
+    /// `shell` or `control`.
+    pub channel: &'static str,
+    /// Verifies signatures.
+    pub signer: Signer,
+    /// The size cap.
+    pub limits: KernelLimits,
+}
+
+/// Receives the next message that fits the size cap, parses and verifies; bad ones are logged
+/// to stderr by case (rate-limited) and dropped without a reply.
+pub async fn receive(socket: &mut impl SocketRecv, intake: &Intake) -> ZmqResult<WireMessage> {
     loop {
-        let frames: Vec<Vec<u8>> = socket.recv().await?.into_vec().into_iter().map(|b| b.to_vec()).collect();
-        match WireMessage::parse(frames, signer) {
+        let frames = socket.recv().await?.into_vec();
+        match accept(frames, intake) {
             Ok(message) => return Ok(message),
-            Err(error) => log_dropped(&error),
+            Err(error) => log_incident(intake.channel, Incident::of_wire(&error), &error),
         }
     }
 }
 
-fn log_dropped(error: &WireError) {
-    eprintln!("spinfoil kernel: message dropped: {error}");
+/// Checks the size of `frames` before copying them, then parses and verifies them.
+pub fn accept(frames: Vec<Bytes>, intake: &Intake) -> Result<WireMessage, WireError> {
+    let bytes = frames.iter().map(Bytes::len).fold(0_usize, usize::saturating_add);
+    let limit = intake.limits.max_message_bytes;
+    if bytes > limit {
+        return Err(WireError::TooLarge { bytes, limit });
+    }
+    WireMessage::parse_within(frames.into_iter().map(|b| b.to_vec()).collect(), &intake.signer, limit)
 }
 
-/// Signs and sends `message`.
+/// Signs and sends `message`; a failure (e.g. the client has gone) is logged and otherwise
+/// ignored, so the kernel serves the next request.
 pub async fn send(socket: &mut impl SocketSend, message: &WireMessage, signer: &Signer) {
     let frames: Vec<Bytes> = message.to_frames(signer).into_iter().map(Bytes::from).collect();
     let Ok(zmq_message) = ZmqMessage::try_from(frames) else { return };
     if let Err(error) = socket.send(zmq_message).await {
-        eprintln!("spinfoil kernel: could not send {}: {error}", message.header.msg_type);
+        let detail = format!("could not send {}: {error}", message.header.msg_type);
+        log_incident("send", Incident::Undeliverable, detail);
     }
 }
 

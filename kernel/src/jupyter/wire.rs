@@ -8,6 +8,11 @@ use serde_json::{json, Value};
 /// The frame separating routing identities from the message.
 pub const DELIMITER: &[u8] = b"<IDS|MSG>";
 
+/// Default cap on one message's size, all frames together: 16 MiB (16 777 216 bytes). A cell's
+/// code can be up to this size; larger messages are dropped unread. Change it for a kernel with
+/// the environment variable `SPINFOIL_MAX_MESSAGE_MB` (see `KernelLimits::from_env`).
+pub const DEFAULT_MAX_MESSAGE_BYTES: usize = 16 * 1024 * 1024;
+
 /// Why a multipart message was not accepted.
 #[derive(Debug, thiserror::Error, PartialEq)]
 #[non_exhaustive]
@@ -21,6 +26,14 @@ pub enum WireError {
     /// The HMAC signature does not match.
     #[error("bad signature on a {0} message")]
     BadSignature(String),
+    /// The frames together exceed the size cap.
+    #[error("message of {bytes} bytes exceeds the cap of {limit} bytes")]
+    TooLarge {
+        /// Size of all frames together, bytes.
+        bytes: usize,
+        /// The cap, bytes.
+        limit: usize,
+    },
     /// A JSON part could not be parsed.
     #[error("the {part} part is not valid JSON: {message}")]
     Json {
@@ -49,7 +62,17 @@ pub struct WireMessage {
 }
 
 impl WireMessage {
-    /// Parses and verifies the frames of one multipart message.
+    /// Parses and verifies one multipart message after checking that its frames together hold
+    /// at most `max_bytes` bytes ([`DEFAULT_MAX_MESSAGE_BYTES`] in the kernel).
+    pub fn parse_within(frames: Vec<Vec<u8>>, signer: &Signer, max_bytes: usize) -> Result<Self, WireError> {
+        let bytes = frames.iter().map(Vec::len).fold(0_usize, usize::saturating_add);
+        if bytes > max_bytes {
+            return Err(WireError::TooLarge { bytes, limit: max_bytes });
+        }
+        Self::parse(frames, signer)
+    }
+
+    /// Parses and verifies the frames of one multipart message (no size cap).
     pub fn parse(frames: Vec<Vec<u8>>, signer: &Signer) -> Result<Self, WireError> {
         let count = frames.len();
         let split = frames.iter().position(|f| f == DELIMITER).ok_or(WireError::NoDelimiter(count))?;
@@ -192,6 +215,18 @@ mod tests {
         let mut bad_json = request(&Signer::new(""));
         bad_json[4] = b"{not json".to_vec();
         assert!(matches!(WireMessage::parse(bad_json, &Signer::new("")), Err(WireError::Json { part: "header", .. })));
+    }
+
+    #[test]
+    fn a_message_over_the_cap_is_refused_before_parsing() {
+        let signer = Signer::new("key");
+        let frames = request(&signer);
+        let size: usize = frames.iter().map(Vec::len).sum();
+        assert!(WireMessage::parse_within(frames.clone(), &signer, size).is_ok());
+        let refused = WireMessage::parse_within(frames, &signer, size - 1);
+        assert_eq!(refused, Err(WireError::TooLarge { bytes: size, limit: size - 1 }));
+        let garbage = vec![vec![b'x'; 100]];
+        assert!(matches!(WireMessage::parse_within(garbage, &signer, 10), Err(WireError::TooLarge { .. })));
     }
 
     #[test]

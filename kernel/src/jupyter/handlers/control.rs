@@ -1,5 +1,6 @@
 //! The control channel: interrupt, shutdown (and restart), kernel_info; never blocked by a cell.
 use super::info::kernel_info;
+use crate::jupyter::incident_log::{log_incident, Incident};
 use crate::jupyter::messages::ShutdownRequest;
 use crate::jupyter::wire::WireMessage;
 use crate::jupyter::worker::Worker;
@@ -40,7 +41,7 @@ impl ControlHandlers {
             }
             "kernel_info_request" => (Some(request.reply("kernel_info_reply", kernel_info())), ControlOutcome::Continue),
             other => {
-                eprintln!("spinfoil kernel: unknown control message type {other:?} ignored");
+                log_incident("control", Incident::UnknownType, format_args!("{other:?} ignored"));
                 (None, ControlOutcome::Continue)
             }
         }

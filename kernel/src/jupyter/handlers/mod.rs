@@ -8,6 +8,7 @@ pub use control::{ControlHandlers, ControlOutcome};
 pub use info::kernel_info;
 
 use super::history::History;
+use super::incident_log::{log_incident, Incident};
 use super::iopub::Iopub;
 use super::messages::HistoryRequest;
 use super::wire::WireMessage;
@@ -40,7 +41,7 @@ impl ShellHandlers {
             "kernel_info_request" => request.reply("kernel_info_reply", kernel_info()),
             "comm_info_request" => request.reply("comm_info_reply", json!({"status": "ok", "comms": {}})),
             other => {
-                eprintln!("spinfoil kernel: unknown shell message type {other:?} ignored");
+                log_incident("shell", Incident::UnknownType, format_args!("{other:?} ignored"));
                 return None;
             }
         };
@@ -69,7 +70,7 @@ impl ShellHandlers {
 
 /// An error reply for a request whose content could not be read.
 pub fn bad_request(request: &WireMessage, reply_type: &str, why: &str) -> WireMessage {
-    eprintln!("spinfoil kernel: malformed {}: {why}", request.header.msg_type);
+    log_incident("shell", Incident::BadContent, format_args!("{}: {why}; answered with an error", request.header.msg_type));
     request.reply(reply_type, error_content("BadRequest", why))
 }
 
