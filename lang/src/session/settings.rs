@@ -77,7 +77,7 @@ impl SessionSettings {
     /// The message of a cell that ran out of wall time.
     pub(crate) fn wall_time_message(&self) -> String {
         format!(
-            "the cell ran longer than {} (limit max_cell_time); a study too large for one cell?",
+            "the cell ran longer than {} (limit max_cell_time); a loop that never ends, or a study to split into shards?",
             seconds_text(self.max_cell_time)
         )
     }

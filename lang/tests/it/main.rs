@@ -1,6 +1,7 @@
 //! All spinfoil-lang integration tests, compiled into one binary.
 mod bad_scripts;
 mod display;
+mod limits;
 mod packages;
 mod session;
 mod sandbox;
