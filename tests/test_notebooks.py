@@ -1,7 +1,11 @@
 """Every notebook in notebooks/ runs in Jupyter (nbclient, PyPI) with the Spinfoil kernel, and
 the headless runner (`spinfoil report`, no Jupyter) produces the same outputs and an HTML report.
+The notebooks are stored with their outputs (`scripts/refresh-notebooks`), tell their study in
+markdown (question, method, result, caveats) and show the safety caution.
+Notebooks named rust_cells_*.ipynb need the optional Rust-cell feature and are tested elsewhere.
 """
 import copy
+import functools
 
 import nbformat
 import pytest
@@ -18,7 +22,10 @@ def kernelspec():
     install_kernelspec()
 
 
+@functools.lru_cache(maxsize=None)
 def run_with_nbclient(path):
+    """The notebook at `path` executed by nbclient with the Spinfoil kernel (once per test run;
+    callers only read it)."""
     notebook = nbformat.read(path, as_version=4)
     NotebookClient(notebook, kernel_name="spinfoil", timeout=120, allow_errors=False).execute()
     return notebook
@@ -66,6 +73,40 @@ def all_outputs(notebook):
 
 def test_there_are_demo_notebooks():
     assert NOTEBOOKS, "notebooks/ holds no .ipynb"
+
+
+def test_notebooks_that_need_rust_cells_are_left_to_their_own_step():
+    assert not [p for p in NOTEBOOKS if p.name.startswith("rust_cells_")]
+
+
+def output_shape(cell):
+    """What a code cell shows, without the values: each output's type and MIME types."""
+    return [(o["output_type"], tuple(sorted(o.get("data", {})))) for o in merge_streams([strip(o) for o in cell.outputs])]
+
+
+@pytest.mark.parametrize("path", NOTEBOOKS, ids=lambda p: p.name)
+def test_notebook_is_stored_with_its_outputs(path):
+    """The stored notebook was refreshed after its last change: every code cell has run, in order,
+    without error, and shows the same kinds of output a fresh run shows (numbers may differ after
+    an engine change; `scripts/refresh-notebooks` brings them up to date)."""
+    stored = nbformat.read(path, as_version=4)
+    fresh = run_with_nbclient(path)
+    code = [c for c in stored.cells if c.cell_type == "code"]
+    assert [c.execution_count for c in code] == list(range(1, len(code) + 1)), "run scripts/refresh-notebooks"
+    assert not [o for c in code for o in c.outputs if o.output_type == "error"]
+    fresh_code = [c for c in fresh.cells if c.cell_type == "code"]
+    assert [output_shape(c) for c in code] == [output_shape(c) for c in fresh_code], "run scripts/refresh-notebooks"
+
+
+@pytest.mark.parametrize("path", NOTEBOOKS, ids=lambda p: p.name)
+def test_notebook_tells_its_study_with_the_caution(path):
+    notebook = nbformat.read(path, as_version=4)
+    markdown = "\n".join(c.source for c in notebook.cells if c.cell_type == "markdown")
+    assert notebook.cells[0].cell_type == "markdown" and notebook.cells[0].source.startswith("# ")
+    assert SAFETY in markdown
+    assert "invented" in markdown, "say that the scenario and demo coefficients are invented"
+    limits = ("caveat", "does not capture", "not modelled", "limits of")
+    assert any(word in markdown.lower() for word in limits), "a notebook says what the model does not capture"
 
 
 @pytest.mark.parametrize("path", NOTEBOOKS, ids=lambda p: p.name)
