@@ -99,6 +99,16 @@ def test_notebook_is_stored_with_its_outputs(path):
 
 
 @pytest.mark.parametrize("path", NOTEBOOKS, ids=lambda p: p.name)
+def test_stored_notebook_exports_to_html_with_nbconvert(path):
+    """What a user gets from `jupyter nbconvert --to html` on the stored notebook: its tables and
+    charts, and the caution."""
+    from nbconvert import HTMLExporter
+
+    html, _ = HTMLExporter().from_notebook_node(nbformat.read(path, as_version=4))
+    assert "<table" in html and SAFETY in html
+
+
+@pytest.mark.parametrize("path", NOTEBOOKS, ids=lambda p: p.name)
 def test_notebook_tells_its_study_with_the_caution(path):
     notebook = nbformat.read(path, as_version=4)
     markdown = "\n".join(c.source for c in notebook.cells if c.cell_type == "markdown")
