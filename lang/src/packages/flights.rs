@@ -4,9 +4,11 @@ use super::discs::DiscValue;
 use super::environments::EnvironmentValue;
 use super::throws::ThrowValue;
 use crate::help::{FnDoc, Registrar};
-use crate::{Cell, Table};
+use crate::{Axis, Cell, Panel, Render, Series, Table, TimeSeries};
 use rhai::NativeCallContext;
-use spinfoil_engine::{fly_to_rest, Flight, FlightMetrics, FlightSettings, GroundPlay, GroundSettings, ReleaseState};
+use spinfoil_engine::{
+    fly_to_rest, DiscBody, Flight, FlightMetrics, FlightSettings, GroundPlay, GroundSettings, ReleaseState,
+};
 use std::sync::Arc;
 
 /// A flight as scripts hold it: the engine's flight and what it was flown with.
@@ -20,6 +22,8 @@ pub(crate) struct FlightValue {
     pub flight: Arc<Flight>,
     /// The ground play after landing, when the environment names a ground.
     pub ground: Option<Arc<GroundPlay>>,
+    /// The rigid body that flew (mass, I_z, I_x, diameter).
+    pub body: DiscBody,
 }
 
 const RPM_PER_RAD_S: f64 = 60.0 / std::f64::consts::TAU;
@@ -34,9 +38,10 @@ pub(crate) fn fly_disc(
     let conditions = environment.conditions()?;
     let label = disc.design.name.clone();
     let settings = FlightSettings::default();
+    let body = disc.body();
     if let Some(ground) = environment.ground()? {
         let to_rest = fly_to_rest(
-            &disc.body(),
+            &body,
             &disc.aero,
             &release,
             &conditions,
@@ -50,11 +55,11 @@ pub(crate) fn fly_disc(
             release,
             flight: Arc::new(to_rest.flight),
             ground: Some(Arc::new(to_rest.ground)),
+            body,
         });
     }
-    let flight =
-        spinfoil_engine::fly(&disc.body(), &disc.aero, &release, &conditions, &settings).map_err(|e| e.to_string())?;
-    Ok(FlightValue { label, release, flight: Arc::new(flight), ground: None })
+    let flight = spinfoil_engine::fly(&body, &disc.aero, &release, &conditions, &settings).map_err(|e| e.to_string())?;
+    Ok(FlightValue { label, release, flight: Arc::new(flight), ground: None, body })
 }
 
 /// Registers `fly`, the `Flight` type and its exports.
@@ -83,6 +88,7 @@ pub(crate) fn register(reg: &mut Registrar) {
         "let text = fly(d, t).to_csv();",
     ));
     register_metric_fields(reg);
+    register_wobble_view(reg);
     super::compare::register_compare_flights(reg);
     reg.text(|f: &mut FlightValue| {
         let m = f.flight.metrics;
@@ -129,7 +135,24 @@ pub(crate) const METRICS: &[Metric] = &[
     ("max_axis_rate_deg_s", "largest rate of the disc's axis (roll and pitch motion), °/s", |f| {
         m(f).max_axis_rate_rad_s.to_degrees()
     }),
+    (
+        "initial_wobble_deg",
+        "wobble angle at release, °: the angle between the disc's axis and its angular momentum (0 for a clean release)",
+        |f| m(f).initial_wobble_rad.to_degrees(),
+    ),
+    (
+        "wobble_frequency_hz",
+        "rate at which the axis circles its angular momentum at release, Hz: I_z ω_s / (I_x cos θ) / 2π",
+        |f| wobble_frequency_hz(f),
+    ),
 ];
+
+/// The torque-free cone rate of the axis at release, Hz (Goldstein, Poole & Safko (2002), §5.6).
+fn wobble_frequency_hz(f: &FlightValue) -> f64 {
+    let b = &f.body;
+    let theta = m(f).initial_wobble_rad;
+    b.spin_inertia_kg_m2 * f.release.spin_rad_s.abs() / (b.transverse_inertia_kg_m2 * theta.cos()) / std::f64::consts::TAU
+}
 
 fn m(f: &FlightValue) -> &FlightMetrics {
     &f.flight.metrics
@@ -141,6 +164,12 @@ fn register_metric_fields(reg: &mut Registrar) {
         reg.getter("Flight", field, doc, move |f: &mut FlightValue| get(f));
     }
     reg.getter("Flight", "name", "the disc's name", |f: &mut FlightValue| f.label.clone());
+    reg.getter(
+        "Flight",
+        "wobble_half_time_s",
+        "time after release for the wobble angle to fall to half its release value, s (nothing for a clean release or a wobble that never halved before landing)",
+        |f: &mut FlightValue| m(f).wobble_half_time_s.map_or(rhai::Dynamic::UNIT, rhai::Dynamic::from_float),
+    );
     register_ground_fields(reg);
     reg.getter("Flight", "landed", "true when the flight ended by ground contact", |f: &mut FlightValue| {
         f.flight.landed
@@ -226,4 +255,35 @@ fn register_ground_fields(reg: &mut Registrar) {
         "how the ground play ended (\"stopped\", \"slid\", ...; nothing without a ground)",
         |f: &mut FlightValue| f.ground.as_ref().map_or(rhai::Dynamic::UNIT, |g| rhai::Dynamic::from(g.describe())),
     );
+}
+
+fn register_wobble_view(reg: &mut Registrar) {
+    reg.engine.register_fn("wobble_view", |ctx: NativeCallContext, items: rhai::Array| {
+        let flights = super::compare::items_of::<FlightValue>(&ctx, &items, "Flight")?;
+        Ok::<_, Box<rhai::EvalAltResult>>(wobble_view(&flights))
+    });
+    reg.engine.register_fn("wobble_view", |f: FlightValue| wobble_view(&[f]));
+    reg.doc(FnDoc::new(
+        "wobble_view(flights: Flight or array of Flight) -> Chart",
+        "The wobble angle (°, between the disc's axis and its angular momentum) against time (s) over the first part of each flight, one line per flight, to compare how fast the air damps an off-axis release.",
+        "wobble_view([fly(one_piece, wobbly), fly(rim_heavy, wobbly)])",
+    ));
+}
+
+/// Shown span of a wobble chart: four times the slowest half time (at least 1 s), or the flight.
+fn wobble_span_s(flights: &[FlightValue]) -> f64 {
+    let halves = flights.iter().filter_map(|f| m(f).wobble_half_time_s);
+    let span = halves.fold(0.25_f64, f64::max) * 4.0;
+    let longest = flights.iter().map(|f| m(f).time_aloft_s).fold(0.0, f64::max);
+    span.min(longest).max(longest.min(1.0))
+}
+
+fn wobble_view(flights: &[FlightValue]) -> super::charts::ChartValue {
+    let span_s = wobble_span_s(flights);
+    let panel = flights.iter().fold(Panel::new(Axis::new("wobble", "°")), |panel, f| {
+        let points = f.flight.samples.iter().take_while(|s| s.time_s <= span_s);
+        panel.series(Series::new(f.label.clone(), points.map(|s| (s.time_s, s.wobble_rad.to_degrees())).collect()))
+    });
+    let chart = TimeSeries::new("Wobble after release").panel(panel);
+    super::charts::ChartValue { bundle: chart.render() }
 }

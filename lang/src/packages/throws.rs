@@ -6,7 +6,9 @@ use crate::help::{FnDoc, Registrar};
 use crate::options::{OptionSpec, OptionValues};
 use rhai::{Dynamic, Map, NativeCallContext};
 use serde::{Deserialize, Serialize};
-use spinfoil_engine::{CoupledEffort, Effort, EffortThrow, Hand, IndependentEffort, ReleasePose, ReleaseState, Style};
+use spinfoil_engine::{
+    release_with_wobble, CoupledEffort, Effort, EffortThrow, Hand, IndependentEffort, ReleasePose, ReleaseState, Style,
+};
 use std::f64::consts::PI;
 
 /// A throw as scripts hold it.
@@ -63,7 +65,27 @@ const POSE_OPTIONS: [OptionSpec; 8] = [
         "direction of the velocity from downrange, to the left positive (default 0)",
     ),
     OptionSpec::optional("height_m", 0.0, 3.0, "release height of the centre of mass (default 1)"),
-    OptionSpec::optional("wobble_rad_s", 0.0, 50.0, "off-axis angular velocity at release (default 0)"),
+    OptionSpec::optional(
+        "wobble_rad_s",
+        0.0,
+        50.0,
+        "off-axis angular velocity at release (default 0); for an angle in degrees see release_for(throw, disc, #{ wobble_deg })",
+    ),
+];
+
+const WOBBLE_OPTIONS: [OptionSpec; 2] = [
+    OptionSpec::number(
+        "wobble_deg",
+        0.0,
+        60.0,
+        "wobble angle at release: the cone half-angle between the disc's axis and its angular momentum",
+    ),
+    OptionSpec::optional(
+        "wobble_direction_deg",
+        -180.0,
+        180.0,
+        "direction of the off-axis rate in the disc plane, from forward toward the left (default 0)",
+    ),
 ];
 
 const RELEASE_ONLY: [OptionSpec; 4] = [
@@ -126,6 +148,12 @@ pub(crate) fn register(reg: &mut Registrar) {
         "The release state a throw gives one disc (for an effort: the speed and spin this disc's mass and inertia give).",
         "effort(#{ work_j: 165, torque_nm: 2.5, wrist_deg: 140 }).release_for(d).speed_mps",
     ));
+    reg.engine.register_fn("release_for", release_for_wobbling);
+    reg.doc(FnDoc::new(
+        "release_for(throw: Throw, disc: Disc, options: map) -> Throw",
+        "The release state a throw gives one disc, leaving the hand wobbling by wobble_deg: the off-axis rate is set from the disc's I_z and I_x and the release spin, |ω⊥| = I_z |ω_s| tan θ / I_x (it replaces any wobble_rad_s). The same angle is a larger rate on a disc with a larger I_z/I_x.",
+        "let wobbly = throw_release(#{ speed_mps: 22, spin_rpm: 900, launch_deg: 10 }).release_for(d, #{ wobble_deg: 5 });",
+    ).with_options(&WOBBLE_OPTIONS));
     register_fields(reg);
 }
 
@@ -157,6 +185,9 @@ fn register_fields(reg: &mut Registrar) {
         t.pose().heading_rad.to_degrees()
     });
     reg.getter("Throw", "height_m", "release height, m", |t: &mut ThrowValue| t.pose().height_m);
+    reg.getter("Throw", "wobble_rad_s", "off-axis angular velocity at release, rad/s", |t: &mut ThrowValue| {
+        t.pose().off_axis_rate_rad_s
+    });
     reg.getter("Throw", "style", "\"backhand\" or \"forehand\"", |t: &mut ThrowValue| {
         style_name(t.pose().style).to_string()
     });
@@ -167,16 +198,20 @@ fn register_fields(reg: &mut Registrar) {
 fn describe(t: &ThrowValue) -> String {
     let pose = t.pose();
     let how = format!("{} {}", hand_name(pose.hand), style_name(pose.style));
+    let wobble = match pose.off_axis_rate_rad_s {
+        rate if rate > 0.0 => format!(", off-axis {rate:.2} rad/s"),
+        _ => String::new(),
+    };
     match t {
         ThrowValue::Release(s) => format!(
-            "{how} release: {:.1} m/s, {:.0} rpm, launch {:.1}°, hyzer {:.1}°",
+            "{how} release: {:.1} m/s, {:.0} rpm, launch {:.1}°, hyzer {:.1}°{wobble}",
             s.speed_mps,
             s.spin_rad_s * RPM_PER_RAD_S,
             pose.launch_rad.to_degrees(),
             pose.roll_rad.to_degrees()
         ),
         ThrowValue::Effort(_) => format!(
-            "{how} effort, launch {:.1}°, hyzer {:.1}°",
+            "{how} effort, launch {:.1}°, hyzer {:.1}°{wobble}",
             pose.launch_rad.to_degrees(),
             pose.roll_rad.to_degrees()
         ),
@@ -245,4 +280,13 @@ fn effort(ctx: NativeCallContext, opts: Map) -> Fallible<ThrowValue> {
 
 fn release_for(ctx: NativeCallContext, throw: &mut ThrowValue, disc: DiscValue) -> Fallible<ThrowValue> {
     throw.release_for(&disc).map(ThrowValue::Release).map_err(|e| design_error(&ctx, e))
+}
+
+fn release_for_wobbling(ctx: NativeCallContext, throw: &mut ThrowValue, disc: DiscValue, opts: Map) -> Fallible<ThrowValue> {
+    let v = options(&ctx, &opts, &WOBBLE_OPTIONS)?;
+    let release = throw.release_for(&disc).map_err(|e| design_error(&ctx, e))?;
+    let wobble_rad = v.number_or("wobble_deg", 0.0).to_radians();
+    let direction_rad = v.number_or("wobble_direction_deg", 0.0).to_radians();
+    let state = release_with_wobble(&release, &disc.body(), wobble_rad, direction_rad).map_err(|e| design_error(&ctx, e))?;
+    state.validated().map(ThrowValue::Release).map_err(|e| design_error(&ctx, e))
 }

@@ -6,3 +6,4 @@ mod packages;
 mod session;
 mod sandbox;
 mod studies;
+mod wobble;
