@@ -6,6 +6,7 @@ mod common;
 mod flight;
 mod ground;
 mod mass;
+mod properties;
 mod study;
 mod throw;
 mod wind;

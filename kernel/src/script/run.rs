@@ -45,10 +45,10 @@ pub enum ScriptError {
     },
 }
 
-/// Runs the script at `path`.
+/// Runs the script at `path`; its folder is the study folder (where `save` and `load` work).
 pub fn run_script(path: &Path, settings: &ScriptSettings) -> Result<ScriptOutcome, ScriptError> {
     let code = std::fs::read_to_string(path).map_err(|source| ScriptError::Read { path: path.display().to_string(), source })?;
-    let mut session = Session::new(SessionSettings::default());
+    let mut session = Session::new(SessionSettings::for_script(path));
     let sink = Arc::new(TerminalSink::new(&settings.out_dir, settings.export));
     let outcome = session.eval(&code, sink.clone());
     sink.end_cell();

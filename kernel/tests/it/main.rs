@@ -1,4 +1,5 @@
 //! Integration tests of the `spinfoil` binary, one module per capability.
+mod atomic_save;
 mod command_line;
 mod shards;
 mod support;
