@@ -22,7 +22,7 @@ import pytest
 import zmq
 from jupyter_client.manager import KernelManager
 
-from kernel_support import KERNEL_NAME, install_kernelspec, kernel_pid, wait_for_reply
+from kernel_support import KERNEL_NAME, install_kernelspec, kernel_pid, rss_mb, wait_for_reply
 
 install_kernelspec()
 
@@ -312,3 +312,22 @@ def test_a_frame_announcing_a_terabyte_is_refused_by_the_transport(kernel_factor
     assert heartbeat_answers(manager)
     assert manager.is_alive()
     assert "spinfoil kernel: transport: oversized message: a peer announced a frame of 1099511627776 bytes" in log_text(log, log_path)
+
+
+def test_a_thousand_executes_in_a_row_keep_memory_bounded(kernel_factory):
+    """Load: 1,000 executes on one kernel; the RSS grows by less than 40 MB (relaxed bound for a
+    debug build; release figures: `bash scripts/bench-kernel load`)."""
+    manager, client, _, _ = kernel_factory()
+    pid = kernel_pid(manager)
+    quiet = {"output_hook": lambda msg: None}
+    for k in range(20):
+        client.execute_interactive(f"let warm = {k}; warm * 2", timeout=30, **quiet)
+    before = rss_mb(pid)
+    began = time.monotonic()
+    for k in range(1000):
+        code = f'let v_{k % 50} = [1, 2, 3, {k}]; print("cell {k}"); v_{k % 50}.len()'
+        reply = client.execute_interactive(code, timeout=30, **quiet)
+        assert reply["content"]["status"] == "ok", reply["content"]
+    growth = rss_mb(pid) - before
+    print(f"\n1,000 executes: RSS {before:.1f} MB -> {before + growth:.1f} MB in {time.monotonic() - began:.1f} s")
+    assert growth < 40.0, f"RSS grew by {growth:.1f} MB over 1,000 executes"
