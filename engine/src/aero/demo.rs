@@ -9,17 +9,18 @@
 //!
 //! Measured with the tuned values (I_z 0.0022/0.0021/0.0019 kg·m², masses 175/177/173 g,
 //! 1.5 m release height; tests `demo_*` in `engine/tests/it/aero.rs`), nose 0° / 2°:
-//! driver carries 89.1 / 84.7 m, turns 3.4 / 1.9 m right until 4.9 / 4.2 s, then fades
+//! driver carries 89.1 / 84.7 m, turns 3.3 / 1.9 m right until 4.9 / 4.2 s, then fades
 //! 5.5 / 9.6 m left; midrange 68.3 / 65.6 m, fade from 2.4 / 1.8 s; putter 57.0 / 55.2 m,
 //! fading from the start.
 //!
 //! The damping terms (C_Mq, C_Rp) were retuned so that an off-axis release's wobble dies
 //! away over a plausible time: a 5° wobble on the demo driver at 22 m/s and 15 rev/s halves
-//! after about 0.34 s (test `demo_driver_wobble_halves_in_a_plausible_time` in
+//! after about 0.51 s (test `demo_driver_wobble_halves_in_a_plausible_time` in
 //! `engine/tests/it/flight/wobble.rs`; target a few hundred ms, value from memory, unverified:
-//! wobble on real discs visibly persists for a good part of a second). The first values,
-//! about eight times larger, halved it in 36 ms; the retune changed carry, turn and fade by
-//! under 0.6 m.
+//! wobble on real discs visibly persists for a good part of a second); on the lighter
+//! 170 g driver of the example notebooks (I_x about 6.4e-4 kg·m²) about 0.34 s. The first
+//! values, about twelve times larger, halved it in 36 ms; the retune changed carry, turn and
+//! fade by under 0.6 m.
 //!
 //! The physics behind the tuning: at the low angle of attack of the fast early flight a
 //! nose-down (negative) pitching moment rolls a right-hand backhand to its right (turn); at the
@@ -33,9 +34,9 @@ use super::rates::{RateConvention, RateTerms};
 fn demo_rates() -> RateTerms {
     RateTerms {
         convention: RateConvention::RadPerSecond,
-        pitch_damping: -0.0006,
+        pitch_damping: -0.0004,
         roll_from_spin: 0.0,
-        roll_damping: -0.0017,
+        roll_damping: -0.0012,
         spin_damping: -2.0e-5,
     }
 }
