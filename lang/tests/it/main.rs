@@ -1,4 +1,5 @@
 //! All spinfoil-lang integration tests, compiled into one binary.
+mod bad_input_page;
 mod bad_scripts;
 mod display;
 mod limits;
