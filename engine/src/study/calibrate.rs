@@ -1,5 +1,6 @@
 //! Calibration: fit chosen coefficients of a case's set (any `model.*` input: linear
-//! coefficients or scale factors) to measured flights by Levenberg–Marquardt.
+//! coefficients or scale factors) to measured flights by Levenberg–Marquardt (the
+//! `levenberg-marquardt` crate, see `least_squares.rs`).
 //!
 //! Residuals are (predicted − measured)/σ with σ = [`CalibrationSpec::position_sd_m`] for
 //! positions and [`CalibrationSpec::time_sd_s`] for times aloft. Standard errors come from
@@ -12,7 +13,7 @@
 use nalgebra::DVector;
 use serde::{Deserialize, Serialize};
 
-use super::lm::{check_identifiable, levenberg_marquardt, LmSettings};
+use super::least_squares::{check_identifiable, least_squares, residuals_and_jacobian, FitSettings};
 use super::runner::run_indexed;
 use super::{input_unit, MeasuredFlight, Observation, StudyCase, StudyControl, StudyError};
 use crate::{fly, Flight, FlightSample};
@@ -26,7 +27,9 @@ pub struct CalibrationSpec {
     pub position_sd_m: f64,
     /// Measurement uncertainty of times aloft, s.
     pub time_sd_s: f64,
-    /// Most iterations.
+    /// Patience of the solver: at most `max_iterations` × (k + 1) trial steps for k
+    /// coefficients (MINPACK's maxfev; each step flies every measured flight once). Converging
+    /// fits stop long before.
     pub max_iterations: usize,
     /// Largest accepted condition number of the column-scaled JᵀJ.
     pub max_condition: f64,
@@ -84,7 +87,7 @@ pub struct CalibrationResult {
     pub residual_variance: f64,
     /// Correlation matrix of the fitted coefficients.
     pub correlation: Vec<Vec<f64>>,
-    /// Iterations.
+    /// Iterations (Jacobians the solver asked for).
     pub iterations: usize,
     /// Flights flown.
     pub flights_flown: usize,
@@ -113,11 +116,11 @@ pub fn calibrate(case: &StudyCase, flights: &[MeasuredFlight], spec: &Calibratio
         DVector::from_iterator(rows.iter().map(Vec::len).sum(), r)
     };
     let batch = |points: &[DVector<f64>]| points.iter().map(|p| predict_all(p).map(|rows| weights(&rows))).collect();
-    let settings = LmSettings { max_iterations: spec.max_iterations, relative_step: 1e-4, min_step_scale: 1e-2, tolerance: 1e-10 };
+    let settings = FitSettings { patience: spec.max_iterations, relative_step: 1e-4, min_step_scale: 1e-2, tolerance: 1e-10 };
     let mut evaluations = 0;
-    let (_, j0) = super::lm::residuals_and_jacobian(&start, &batch, &settings, &mut evaluations)?;
+    let (_, j0) = residuals_and_jacobian(&start, &batch, &settings, &mut evaluations)?;
     check_identifiable(&j0, &spec.parameters, spec.max_condition)?;
-    let solution = levenberg_marquardt(start.clone(), &batch, &settings)?;
+    let solution = least_squares(start.clone(), &batch, &settings)?;
     check_identifiable(&solution.jacobian, &spec.parameters, spec.max_condition)?;
     let (m, k) = (solution.residuals.len(), start.len());
     let residual_variance = solution.residuals.norm_squared() / (m - k) as f64;

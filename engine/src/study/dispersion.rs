@@ -166,6 +166,13 @@ impl DispersionSpec {
 /// Runs shard `shard` of a dispersion of `case`.
 pub fn run_dispersion(case: &StudyCase, spec: &DispersionSpec, shard: Shard, control: StudyControl<'_>) -> Result<DispersionResult, StudyError> {
     spec.validate()?;
+    // An input that does not apply to this case (an effort field of a release throw, the
+    // release speed of an effort throw, ...) is refused once, by name, not in every draw.
+    for s in &spec.scatter {
+        let mut probe = case.clone();
+        let value = probe.get(&s.input)?;
+        probe.set(&s.input, value)?;
+    }
     let fixed_body = if spec.scatter.iter().any(|s| changes_body(&s.input)) { None } else { Some(case.disc.body()?) };
     let rows = monte_carlo(spec.throws, spec.seed, shard, control, |rng| {
         let drawn = spec.draw_case(case, rng)?;

@@ -188,6 +188,10 @@ impl StudyCase {
     }
 
     fn set_throw(&mut self, field: &str, value: f64) -> Result<(), StudyError> {
+        if self.effort.is_some() && matches!(field, "speed_mps" | "spin_rps" | "spin_rad_s") {
+            let reason = "the case flies an effort throw, whose speed and spin come from the effort and the disc; vary effort.work_j, effort.wrist_torque_n_m or effort.rim_speed_ratio instead";
+            return Err(not_applicable(&format!("throw.{field}"), reason));
+        }
         let r = &mut self.release;
         match field {
             "speed_mps" => r.speed_mps = value,

@@ -15,7 +15,7 @@ mod control;
 mod dispersion;
 mod error;
 mod inputs;
-mod lm;
+mod least_squares;
 mod measured;
 mod model;
 mod montecarlo;
@@ -43,7 +43,7 @@ pub use optimise::{optimise, NamedValue, Objective, OptimiseResult, OptimiseSpec
 pub use outcome::{metric_unit, CaseOutcome, METRICS};
 pub use scatter_stats::{scatter_stats, symmetric_eigen, Ellipse, ScatterStats, CHI2_2DOF_50, CHI2_2DOF_95};
 pub use shard::{merge_rows, Indexed, Shard};
-pub use signature::{flight_signature, signature_release, FlightSignature, SignatureThrow, SIGNATURE_ADVANCE_RATIO, SIGNATURE_SCALES, SIGNATURE_SPEEDS_MPS};
+pub use signature::{flight_signature, signature_release, FlightSignature, SignatureThrow, SIGNATURE_ADVANCE_RATIO, SIGNATURE_SCALES, SIGNATURE_SPEEDS_MPS, SIGNATURE_SPIN_ENERGY_SHARE};
 pub use sweep::{merge_sweeps, run_sweep, SweepAxis, SweepResult, SweepRow, SweepSpec};
 pub use zone::Zone;
 

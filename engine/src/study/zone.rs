@@ -38,6 +38,39 @@ impl Zone {
         }
     }
 
+    /// The zone's boundary as closed rings of (x, y) points in m, for drawing: a circle as a
+    /// polygon of `vertices` corners; a corridor as one rounded strip (a stadium: the points
+    /// within the half width of a segment) per centre-line segment; a polygon as itself.
+    pub fn outline_m(&self, vertices: usize) -> Vec<Vec<[f64; 2]>> {
+        let n = vertices.max(8);
+        let arc = |c: [f64; 2], r: f64, from: f64, count: usize| -> Vec<[f64; 2]> {
+            (0..=count).map(|i| from + std::f64::consts::PI * i as f64 / count as f64).map(|t| [c[0] + r * t.cos(), c[1] + r * t.sin()]).collect()
+        };
+        match self {
+            Zone::Circle { centre_m, radius_m } => {
+                let mut ring = arc(*centre_m, *radius_m, 0.0, n / 2);
+                ring.extend(arc(*centre_m, *radius_m, std::f64::consts::PI, n / 2));
+                vec![ring]
+            }
+            Zone::Corridor { centre_line_m, half_width_m } => centre_line_m
+                .windows(2)
+                .map(|w| {
+                    let heading = (w[1][1] - w[0][1]).atan2(w[1][0] - w[0][0]);
+                    let half = std::f64::consts::FRAC_PI_2;
+                    let mut ring = arc(w[1], *half_width_m, heading - half, n / 2);
+                    ring.extend(arc(w[0], *half_width_m, heading + half, n / 2));
+                    ring.push(ring[0]);
+                    ring
+                })
+                .collect(),
+            Zone::Polygon { points_m } => {
+                let mut ring = points_m.clone();
+                ring.extend(points_m.first().copied());
+                vec![ring]
+            }
+        }
+    }
+
     /// The share (0 … 1) of `points` inside; 0 for no points.
     pub fn share_inside(&self, points: &[[f64; 2]]) -> f64 {
         if points.is_empty() {

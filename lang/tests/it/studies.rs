@@ -101,9 +101,27 @@ fn dispersion_is_deterministic_and_summarises_the_cloud() {
     let text = value(&mut s, "r.to_string()");
     assert!(text.contains("Keep clear of the throwing lane"), "caution beside the table:\n{text}");
     let chart = svg(&mut s, "r");
-    for label in ["landing points", "50 % ellipse", "95 % ellipse", "downrange x", "lateral y", "Keep clear"] {
+    for label in ["landing points", "50 % ellipse", "95 % ellipse", "downrange x", "lateral y", "Keep clear", "target (60, 0) m, radius 10 m"] {
         assert!(chart.contains(label), "scatter chart lacks {label}");
     }
+    // The target circle is drawn: an outline and a light fill in the zone colour.
+    assert!(chart.matches("#2E7D32").count() >= 3, "zone outline, fill and label");
+}
+
+#[test]
+fn the_scatter_chart_draws_a_fairway_and_effort_scatter_spreads_the_landings() {
+    let mut s = session();
+    value(&mut s, "let arm = effort(#{ work_j: 60, torque_nm: 2.5, wrist_deg: 140, launch_deg: 10 });");
+    let study = |sd: f64| format!("dispersion(rim_heavy, arm, day, #{{ count: 12, seed: 3, scatter: #{{ work_j: normal(0, {sd}) }}, fairway: #{{ to_x_m: 120, half_width_m: 8 }} }})");
+    let sd_x = |s: &mut Session, sd: f64| number(s, &format!("{}.rows.filter(|r| r.quantity == \"landing sd x\")[0].value", study(sd)));
+    let (none, some) = (sd_x(&mut s, 0.0), sd_x(&mut s, 4.0));
+    assert!(none < 1e-9 && some > 0.5, "landing sd x {none} m without and {some} m with effort scatter");
+    let chart = svg(&mut s, &study(4.0));
+    for label in ["fairway ±8 m to (120, 0) m", "Keep clear of the throwing lane", "landing points"] {
+        assert!(chart.contains(label), "scatter chart lacks {label}");
+    }
+    let e = error(&mut s, "dispersion(rim_heavy, arm, day, #{ count: 4, scatter: #{ speed_mps: normal(0, 1) } })");
+    assert!(e.message.contains("effort.work_j"), "{}", e.message);
 }
 
 #[test]
@@ -122,17 +140,23 @@ fn signatures_compare_designs_and_match_the_battery_flights() {
     let mut s = session();
     value(&mut s, "let r = signature([one_piece, rim_heavy]);");
     assert_eq!(number(&mut s, "r.rows.len()"), 2.0);
-    // The battery's 24 m/s throw: launch 10°, 1 m high, ωR/V = 0.5 (engine/src/study/signature.rs).
-    let radius = number(&mut s, "one_piece.diameter_cm") / 200.0;
-    let rpm = 0.5 * 24.0 / radius * 60.0 / std::f64::consts::TAU;
+    // The battery's 24 m/s throw: launch 10°, 1 m high, spin energy ½ I_z ω² = 0.2 · ½ m V²
+    // (engine/src/study/signature.rs).
+    let mass_kg = number(&mut s, "one_piece.mass_g") / 1000.0;
+    let inertia = number(&mut s, "one_piece.spin_inertia_g_cm2") * 1e-7;
+    let rpm = 24.0 * (0.2 * mass_kg / inertia).sqrt() * 60.0 / std::f64::consts::TAU;
     let fly = format!("fly(one_piece, throw_release(#{{ speed_mps: 24, spin_rpm: {rpm}, launch_deg: 10, height_m: 1 }})).carry_m");
     let carry = number(&mut s, &fly);
     let signature = number(&mut s, "r.rows[0].carry_at_24_m");
     assert!((carry - signature).abs() < 1e-6 * carry, "{carry} vs {signature}");
     let chart = svg(&mut s, "r");
-    for label in ["P-7 one-piece", "P-7 rim-heavy", "release speed", "fade side positive"] {
+    for label in ["P-7 one-piece: greatest turn bank", "P-7 rim-heavy: fade hook after apex", "release speed", "fade side positive"] {
         assert!(chart.contains(label), "signature chart lacks {label}");
     }
+    // Same effort: the rim-heavy design banks less toward the turn side at 28 m/s (precession
+    // rate M/|H|, Euler's equations; common practice).
+    let turn = |s: &mut Session, row: usize| number(s, &format!("r.rows[{row}].high_speed_turn_deg"));
+    assert!(turn(&mut s, 1) < turn(&mut s, 0), "rim-heavy {} vs one-piece {}", turn(&mut s, 1), turn(&mut s, 0));
     assert_eq!(number(&mut s, "signature(one_piece).rows.len()"), 1.0);
 }
 

@@ -93,3 +93,48 @@ fn flight_dispersion_summary_reports_scatter_zone_shares_and_the_caution() {
     assert!(summary.caution.contains("Keep clear of the throwing lane"));
     assert!(summary.landing.unwrap().sd_m[1] > 1.0, "roll scatter spreads landings sideways");
 }
+
+/// A dispersion of the invented overmold design thrown by an independent effort, with normal
+/// scatter of `sd_j` on the effort's linear work.
+fn effort_dispersion(sd_j: f64) -> DispersionResult {
+    let mut case = design_case();
+    case.effort = Some(Effort::Independent(IndependentEffort { linear_work_j: 45.0, wrist_torque_n_m: 2.0, wrist_turn_rad: 1.5, arm_mass_kg: 0.4 }));
+    let spec = DispersionSpec {
+        throws: 24,
+        seed: 3,
+        scatter: vec![Scatter { input: "effort.work_j".into(), spread: Spread::Normal { sd: sd_j } }],
+        gust_intensity: None,
+        zones: Vec::new(),
+    };
+    run_dispersion(&case, &spec, Shard::whole(), StudyControl::none()).unwrap()
+}
+
+#[test]
+fn scatter_on_an_effort_spreads_the_landings_and_none_gives_none() {
+    let sd_x = |r: &DispersionResult| r.summary.as_ref().unwrap().landing.unwrap().sd_m[0];
+    let (none, some, more) = (effort_dispersion(0.0), effort_dispersion(2.0), effort_dispersion(6.0));
+    assert_eq!(none.summary.as_ref().unwrap().failed, 0);
+    // No scatter: every throw is the same flight (deterministic integrator; definition).
+    assert!(sd_x(&none) < 1e-9, "{}", sd_x(&none));
+    // More work scatter, more carry scatter: speed ∝ √W, so carry spreads roughly in proportion
+    // to the work's sd for small scatter (source: work–energy theorem; common practice).
+    assert!(sd_x(&some) > 0.5, "{}", sd_x(&some));
+    assert!(sd_x(&more) > 2.0 * sd_x(&some), "{} vs {}", sd_x(&more), sd_x(&some));
+    eprintln!("effort work sd 0/2/6 J → landing sd x {:.3}/{:.3}/{:.3} m", sd_x(&none), sd_x(&some), sd_x(&more));
+}
+
+#[test]
+fn scatter_on_release_speed_of_an_effort_throw_is_refused_by_name() {
+    let mut case = design_case();
+    case.effort = Some(Effort::Independent(IndependentEffort { linear_work_j: 45.0, wrist_torque_n_m: 2.0, wrist_turn_rad: 1.5, arm_mass_kg: 0.4 }));
+    let spec = DispersionSpec {
+        throws: 4,
+        seed: 1,
+        scatter: vec![Scatter { input: "throw.speed_mps".into(), spread: Spread::Normal { sd: 1.0 } }],
+        gust_intensity: None,
+        zones: Vec::new(),
+    };
+    let err = run_dispersion(&case, &spec, Shard::whole(), StudyControl::none()).unwrap_err();
+    assert!(matches!(&err, StudyError::NotApplicable { name, reason } if name == "throw.speed_mps" && reason.contains("effort.work_j")), "{err}");
+    assert!(demo_case().set("throw.speed_mps", 20.0).is_ok());
+}

@@ -53,7 +53,7 @@ pub(crate) fn register(reg: &mut Registrar, context: &PackageContext) {
     );
     reg.doc(FnDoc::new(
         "calibrate(disc: Disc, environment: Environment, measured: MeasuredFlights, options: map) -> Study",
-        "Fits the listed coefficients of the disc's linear set (fit: [\"model.drag_min\", ...]; scale factors model.lift_scale etc. too) to the measured flights by Levenberg–Marquardt, each flight flown from its own release in the environment's air. The table lists start and fitted values with standard errors; the chart shows each flight's position residuals (predicted − measured, m) against time. A coefficient the data cannot determine is an error naming it. Options: fit, position_sd_m, time_sd_s, max_iterations.",
+        "Fits the listed coefficients of the disc's linear set (fit: [\"model.drag_min\", ...]; scale factors model.lift_scale etc. too) to the measured flights by Levenberg–Marquardt, each flight flown from its own release in the environment's air. The table lists start and fitted values with standard errors; the chart shows each flight's position residuals (predicted − measured, m) against time. A coefficient the data cannot determine is an error naming it. Options: fit, position_sd_m, time_sd_s, max_iterations (the solver's patience: at most max_iterations × (coefficients + 1) trial steps). Not sharded: each step depends on the one before, so the whole fit runs in every process of a `--shard i/N` run (its flights run in parallel on this machine's cores); run it in a script of its own rather than as an array job.",
         "calibrate(d, environment(), load_measured(\"field_day.csv\"), #{ fit: [\"model.drag_min\", \"model.lift_slope_per_rad\"] })",
     ));
 }

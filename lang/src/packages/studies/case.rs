@@ -39,7 +39,14 @@ fn pose_release(e: &spinfoil_engine::EffortThrow) -> ReleaseState {
     }
 }
 
-/// An input name as scripts may write it: `speed_mps` means `throw.speed_mps`.
+/// An input name as scripts may write it: `speed_mps` means `throw.speed_mps`; an effort's
+/// option names mean its inputs (`work_j` → `effort.work_j`, `torque_nm` →
+/// `effort.wrist_torque_n_m`, `rim_speed_ratio` → `effort.rim_speed_ratio`).
 pub(crate) fn input_name(key: &str) -> String {
-    if key.contains('.') { key.to_string() } else { format!("throw.{key}") }
+    match key {
+        _ if key.contains('.') => key.to_string(),
+        "work_j" | "rim_speed_ratio" | "wrist_torque_n_m" => format!("effort.{key}"),
+        "torque_nm" => "effort.wrist_torque_n_m".to_string(),
+        _ => format!("throw.{key}"),
+    }
 }

@@ -62,7 +62,7 @@ pub(crate) fn register(reg: &mut Registrar, context: &PackageContext) {
     });
     super::register_case_study(reg, context, "dispersion", dispersion, FnDoc::new(
         "dispersion(disc: Disc, throw: Throw, environment: Environment, options: map) -> Study",
-        "Flies many throws whose inputs scatter around the throw's values (Monte Carlo, seeded: the same seed gives the same result) and summarises the landing points: means, standard deviations and the 50 % and 95 % ellipses (m), and the share landing inside a target circle or a fairway. Options: count, seed, gust_intensity, scatter: #{ input: normal(mean, sd) or uniform(low, high), ... } (inputs as in study_inputs(); a bare name such as speed_mps means throw.speed_mps), target: #{ x_m, y_m, radius_m } or fairway: #{ to_x_m, to_y_m, half_width_m }. Predictions are estimates: keep clear of the throwing lane, check landing zones for people and property, and follow local rules and the course designer's safety guidance.",
+        "Flies many throws whose inputs scatter around the throw's values (Monte Carlo, seeded: the same seed gives the same result) and summarises the landing points: means, standard deviations and the 50 % and 95 % ellipses (m), and the share landing inside a target circle or a fairway. Options: count, seed, gust_intensity, scatter: #{ input: normal(mean, sd) or uniform(low, high), ... } (inputs as in study_inputs(); a bare name such as speed_mps means throw.speed_mps; for an effort throw scatter its work_j, torque_nm or rim_speed_ratio, since its speed and spin come from the effort and the disc), target: #{ x_m, y_m, radius_m } or fairway: #{ to_x_m, to_y_m, half_width_m } (drawn on the scatter chart with the landing points). Predictions are estimates: keep clear of the throwing lane, check landing zones for people and property, and follow local rules and the course designer's safety guidance.",
         "dispersion(d, t, environment(), #{ count: 500, seed: 7,\n  scatter: #{ speed_mps: normal(0, 0.8), hyzer_deg: normal(0, 3), launch_deg: uniform(-1, 1) },\n  target: #{ x_m: 90, y_m: 0, radius_m: 10 } })",
     ));
 }
@@ -184,7 +184,10 @@ fn stats_rows(add: &mut impl FnMut(&str, f64, &str), what: &str, s: &ScatterStat
 fn zone_name(zone: &Zone) -> String {
     match zone {
         Zone::Circle { centre_m, radius_m } => format!("target ({:.0}, {:.0}) m, radius {radius_m} m", centre_m[0], centre_m[1]),
-        Zone::Corridor { half_width_m, .. } => format!("fairway ±{half_width_m} m"),
+        Zone::Corridor { centre_line_m, half_width_m } => {
+            let end = centre_line_m.last().copied().unwrap_or([0.0, 0.0]);
+            format!("fairway ±{half_width_m} m to ({:.0}, {:.0}) m", end[0], end[1])
+        }
         Zone::Polygon { .. } => "polygon".into(),
     }
 }
@@ -200,6 +203,10 @@ fn scatter_chart(result: &DispersionResult, design: &str) -> ScatterEllipses {
     .cloud(Series::new("landing points", landings));
     if !rests.is_empty() {
         chart = chart.cloud(Series::new("rest points", rests));
+    }
+    for zone in &result.spec.zones {
+        let rings = zone.outline_m(96).into_iter().map(|ring| ring.into_iter().map(|p| (p[0], p[1])).collect()).collect();
+        chart = chart.zone(zone_name(zone), rings);
     }
     chart
 }

@@ -3,6 +3,11 @@
 //! runs only shard i of N and writes its partial result as JSON into that folder, and
 //! `spinfoil merge FOLDER` calls `merge_shards()`, which merges the partial files of each study
 //! into the single-run result (bitwise equal) and shows it.
+//!
+//! Calibrations and launch optimisation are not sharded: they are sequential algorithms (each
+//! Levenberg–Marquardt or simplex step needs the previous one), so there is nothing to split
+//! across machines; their flights within a step run in parallel on one machine. Signatures are
+//! four flights.
 use super::dispersion::dispersion_value;
 use super::result::StudyValue;
 use super::sweep::sweep_value;

@@ -1,5 +1,5 @@
 //! `signature`: a disc's flight signature (a fixed battery of test throws) on our own scales,
-//! as a table and a chart of the landing offset against release speed.
+//! as a table and a chart of turn bank and fade hook against release speed.
 use super::control::watched;
 use super::result::StudyValue;
 use super::sweep::plain_name;
@@ -22,7 +22,7 @@ pub(crate) fn register(reg: &mut Registrar, context: &PackageContext) {
     });
     reg.doc(FnDoc::new(
         "signature(discs: Disc or array of Disc) -> Study",
-        "Each disc's flight signature: a fixed battery of right-hand backhand throws (flat, launch 10°, nose 0°, 1 m high, 16/20/24/28 m/s, spin with ωR/V = 0.5, sea-level standard calm air) reduced to high-speed turn (m, at 28 m/s), low-speed fade (m, at 16 m/s), glide (s aloft at 20 m/s), carry at 24 m/s (m) and the set's lift-to-drag ratio at 5°. The chart draws each disc's landing offset toward the fade side (m) against release speed (m/s): a curve that rises steeply marks a disc that fades hard when thrown slowly; one below zero at high speed marks high-speed turn.",
+        "Each disc's flight signature: a fixed battery of right-hand backhand throws (flat, launch 10°, nose 0°, 1 m high, 16/20/24/28 m/s, sea-level standard calm air) with the same effort for every disc: the spin's kinetic energy is 0.2 of the translational one, so a rim-heavy disc spins slower but carries more angular momentum. Scales (angles, so they do not grow with carry): high_speed_turn_deg, the greatest bank toward the turn side (anhyzer) at 28 m/s (°, 0 for a disc that never rolls past flat); low_speed_fade_deg, how far the ground track hooks toward the fade side from the apex to landing at 16 m/s (°); glide_s, time aloft at 20 m/s (s); carry_at_24_m (m); lift_to_drag_at_5deg, the set's lift-to-drag ratio at 5°. The chart draws, against release speed, each disc's greatest turn bank (below zero) and its fade hook after the apex (above zero), in degrees toward the fade side.",
         "signature([one_piece, rim_heavy])",
     ));
 }
@@ -33,7 +33,7 @@ fn signature(ctx: &NativeCallContext, context: &PackageContext, discs: Vec<DiscV
         let case = StudyCase::new(
             CaseDisc::Design { design: disc.design.clone() },
             CaseModel::linear(disc.aero.clone()),
-            spinfoil_engine::signature_release(20.0, disc.report.outline.diameter_m()),
+            spinfoil_engine::signature_release(20.0, disc.report.properties.mass_kg, disc.report.properties.spin_inertia_kg_m2),
         );
         let what = format!("signature of {}", disc.design.name);
         let sig = watched(ctx, context, &what, 4, |control| flight_signature(&case, control))?;
@@ -60,15 +60,17 @@ pub(crate) fn signature_value(signatures: &[(String, FlightSignature)]) -> Study
         table = table.note(meaning);
     }
     let mut chart = LineChart::new(
-        "Fade against release speed",
+        "Turn and fade against release speed",
         Axis::new("release speed", "m/s"),
-        Axis::new("landing offset, fade side positive", "m"),
+        Axis::new("angle, fade side positive", "°"),
     );
-    chart.subtitle = Some("Signature battery: flat backhand, launch 10°, ωR/V = 0.5, calm standard air".into());
+    chart.subtitle = Some("Greatest bank toward the turn side (negative) and the track's hook after the apex; battery: flat right-hand backhand, launch 10°, spin energy 0.2 of the translational, calm air".into());
     chart.zero_line = true;
     for (name, sig) in signatures {
-        let points = sig.throws.iter().map(|t| (t.speed_mps, t.landing_lateral_m)).collect();
-        chart = chart.series(Series::new(name.clone(), points));
+        let turn = sig.throws.iter().map(|t| (t.speed_mps, -t.turn_bank_deg)).collect();
+        chart = chart.series(Series::new(format!("{name}: greatest turn bank"), turn));
+        let fade = sig.throws.iter().map(|t| (t.speed_mps, t.fade_hook_deg)).collect();
+        chart = chart.series(Series::new(format!("{name}: fade hook after apex"), fade));
     }
     StudyValue::new(table.note(crate::SAFETY_CAUTION), &chart)
 }
