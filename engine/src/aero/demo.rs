@@ -18,7 +18,7 @@
 //! after about 0.51 s (test `demo_driver_wobble_halves_in_a_plausible_time` in
 //! `engine/tests/it/flight/wobble.rs`; target a few hundred ms, value from memory, unverified:
 //! wobble on real discs visibly persists for a good part of a second); on the lighter
-//! 170 g driver of the example notebooks (I_x about 6.4e-4 kg·m²) about 0.34 s. The first
+//! 170 g driver of the example notebooks (I_x about 6.4e-4 kg·m², 900 rpm) about 0.28 s. The first
 //! values, about twelve times larger, halved it in 36 ms; the retune changed carry, turn and
 //! fade by under 0.6 m.
 //!
