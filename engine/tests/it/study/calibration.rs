@@ -62,6 +62,12 @@ fn recovers_known_coefficients_within_two_standard_errors() {
     case.set("model.lift_slope_per_rad", truth.lift_slope_per_rad * 0.85).unwrap();
     case.set("model.drag_min", truth.drag_min * 1.2).unwrap();
     let result = calibrate(&case, &flights, &spec(&["model.lift_slope_per_rad", "model.drag_min"]), StudyControl::none()).unwrap();
+    eprintln!(
+        "fit: {} iterations, {} flights; {:?}",
+        result.iterations,
+        result.flights_flown,
+        result.parameters.iter().map(|p| format!("{} {:.5} ± {:.5} (start {:.5})", p.name, p.value, p.standard_error, p.initial)).collect::<Vec<_>>()
+    );
     // Least squares with correct weights: the estimate lies within 2 standard errors of the
     // truth with about 95 % probability per coefficient (source: common practice, no published
     // source; the standard errors are s²(JᵀJ)⁻¹, Seber & Wild (1989), Nonlinear Regression, §2.1).

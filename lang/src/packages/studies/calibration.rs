@@ -23,7 +23,7 @@ const CALIBRATE_OPTIONS: &[OptionSpec] = &[
     OptionSpec::text("fit", "a list of coefficient names to fit, e.g. [\"model.drag_min\", \"model.lift_slope_per_rad\"] (see study_inputs())"),
     OptionSpec::optional("position_sd_m", 0.001, 100.0, "measurement uncertainty of positions (default 0.5)"),
     OptionSpec::optional("time_sd_s", 0.001, 10.0, "measurement uncertainty of times aloft (default 0.05)"),
-    OptionSpec::integer("max_iterations", 1, 500, "most Levenberg–Marquardt iterations (default 30)"),
+    OptionSpec::integer("max_iterations", 1, 500, "solver patience: at most max_iterations × (coefficients + 1) Levenberg–Marquardt trial steps (default 30)"),
 ];
 
 /// Registers the measured-flight functions and `calibrate`.
