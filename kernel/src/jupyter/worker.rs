@@ -1,5 +1,6 @@
 //! The thread that owns the [`Session`]: cells run here, so the control socket stays free to
 //! interrupt them.
+use super::incident_log::{log_incident, Incident};
 use spinfoil_lang::{InterruptHandle, Session, SessionSettings};
 use std::panic::{catch_unwind, AssertUnwindSafe};
 use std::sync::mpsc;
@@ -52,7 +53,7 @@ fn serve(settings: SessionSettings, queue: mpsc::Receiver<Job>, handle_tx: mpsc:
     let _ = handle_tx.send(session.interrupt_handle());
     for job in queue {
         if catch_unwind(AssertUnwindSafe(|| job(&mut session))).is_err() {
-            eprintln!("spinfoil kernel: a request panicked inside the session; the session continues");
+            log_incident("session", Incident::Panic, "the request was answered with an InternalError; the session continues");
         }
     }
 }

@@ -1,5 +1,6 @@
 //! Integration tests of the `spinfoil` binary, one module per capability.
 mod atomic_save;
 mod command_line;
+mod robustness;
 mod shards;
 mod support;
