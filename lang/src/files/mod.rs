@@ -4,4 +4,5 @@ mod design_file;
 mod package;
 
 pub use confine::{FileAccessError, StudyFolder};
+pub(crate) use confine::write_atomic;
 pub(crate) use package::{read_confined, register};

@@ -79,9 +79,9 @@ pub(crate) fn keep(ctx: &NativeCallContext, partial: &Partial, shard: Shard) -> 
     };
     let name = format!("partial-{ordinal:03}-{kind}-shard-{}-of-{}.json", shard.index, shard.count);
     let text = serde_json::to_string(partial).map_err(|e| value_error(ctx, e.to_string()))?;
-    std::fs::create_dir_all(&dir)
-        .and_then(|()| std::fs::write(dir.join(&name), text))
-        .map_err(|e| value_error(ctx, format!("cannot write {name}: {e}")))
+    std::fs::create_dir_all(&dir).map_err(|e| value_error(ctx, format!("cannot write {name}: {e}")))?;
+    // Atomic: a shard killed mid-write leaves no truncated partial for `merge` to read.
+    crate::files::write_atomic(&dir.join(&name), &text, &name).map_err(|e| value_error(ctx, e.to_string()))
 }
 
 /// Registers `merge_shards`.
