@@ -22,13 +22,24 @@ def kernelspec():
     install_kernelspec()
 
 
-@functools.lru_cache(maxsize=None)
 def run_with_nbclient(path):
-    """The notebook at `path` executed by nbclient with the Spinfoil kernel (once per test run;
-    callers only read it)."""
-    notebook = nbformat.read(path, as_version=4)
-    NotebookClient(notebook, kernel_name="spinfoil", timeout=120, allow_errors=False).execute()
+    """The notebook at `path` executed by nbclient with the Spinfoil kernel. Each notebook runs
+    once per test session; later calls get the same notebook (callers only read it) or the same
+    failure, so a broken or slow notebook costs its time once."""
+    notebook, failure = executed_once(path)
+    if failure is not None:
+        raise failure
     return notebook
+
+
+@functools.lru_cache(maxsize=None)
+def executed_once(path):
+    notebook = nbformat.read(path, as_version=4)
+    try:
+        NotebookClient(notebook, kernel_name="spinfoil", timeout=120, allow_errors=False).execute()
+    except Exception as failure:  # noqa: BLE001 - handed on to every caller
+        return notebook, failure
+    return notebook, None
 
 
 def run_headless(path, out_dir):
