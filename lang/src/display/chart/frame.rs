@@ -164,7 +164,7 @@ fn chars_per_line(size_px: f64) -> usize {
 }
 
 /// Words of `text` in lines of at most `width` characters.
-fn wrap(text: &str, width: usize) -> Vec<String> {
+pub(crate) fn wrap(text: &str, width: usize) -> Vec<String> {
     let mut lines: Vec<String> = Vec::new();
     for word in text.split_whitespace() {
         match lines.last_mut() {

@@ -6,8 +6,8 @@ use super::bounds::Bounds;
 use super::colour_scale::{scale_colour, wants_dark_text};
 use super::data::Axis;
 use super::font;
-use super::frame::{Area, Drawn, Frame};
-use crate::display::style::{CHART_WIDTH_PX, INK, MUTED_INK, SMALL_PX, TEXT_PX, TICK_PX};
+use super::frame::{wrap, Area, Drawn, Frame};
+use crate::display::style::{text_width_px, CHART_WIDTH_PX, INK, MUTED_INK, SMALL_PX, TEXT_PX, TICK_PX};
 use crate::display::Render;
 use crate::MimeBundle;
 use plotters::element::{EmptyElement, Rectangle, Text};
@@ -122,9 +122,15 @@ fn short(value: f64) -> String {
 /// The colour bar: its title, a vertical gradient, and five labelled ticks.
 fn draw_colour_bar(area: &Area, value: &Axis, (low, high): (f64, f64)) -> Drawn {
     let (_, height) = area.dim_in_pixel();
-    let (top, bottom) = (30, height as i32 - axes::BOTTOM_AREA_PX as i32);
+    // The title wraps to the bar area's width (a long name with its unit would run off the chart).
+    let fits = ((BAR_AREA_PX as f64 - 8.0) / text_width_px("x", TEXT_PX)).max(8.0) as usize;
+    let title = wrap(&value.label(), fits);
+    let line_px = (TEXT_PX * 1.3).round() as i32;
+    for (k, line) in title.iter().enumerate() {
+        area.draw(&Text::new(line.clone(), (4, 6 + line_px * k as i32), font::text(TEXT_PX, INK)))?;
+    }
+    let (top, bottom) = (14 + line_px * title.len() as i32, height as i32 - axes::BOTTOM_AREA_PX as i32);
     let (left, right) = (14, 34);
-    area.draw(&Text::new(value.label(), (4, 6), font::text(TEXT_PX, INK)))?;
     let steps = 64;
     for step in 0..steps {
         let y0 = bottom - (bottom - top) * step / steps;
