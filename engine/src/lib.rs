@@ -27,6 +27,7 @@
 pub mod aero;
 pub mod air;
 pub mod dynamics;
+#[cfg(feature = "evcxr-display")] pub mod evcxr_display;
 pub mod flight;
 pub mod geometry;
 pub mod ground;

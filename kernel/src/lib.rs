@@ -25,5 +25,6 @@ pub mod jupyter;
 pub mod mime;
 pub mod kernelspec;
 pub mod notebook;
+pub mod rust_cells;
 pub mod tee;
 pub mod script;

@@ -42,9 +42,11 @@ impl Worker {
         rx.await.ok()
     }
 
-    /// Stops the running cell (it ends with an `Interrupted` error within a second).
+    /// Stops the running cell (it ends with an `Interrupted` error within a second; a Rust cell's
+    /// process is ended, see [`crate::rust_cells::interrupt`]).
     pub fn interrupt(&self) {
         self.interrupt.interrupt();
+        crate::rust_cells::interrupt();
     }
 }
 

@@ -5,6 +5,7 @@ use super::outputs::{self, DisplayIndex};
 use crate::error_report::ErrorReport;
 use crate::jupyter::handlers::kernel_info;
 use crate::kernelspec::{DISPLAY_NAME, KERNEL_NAME};
+use crate::rust_cells::SessionCells;
 use crate::tee::Tee;
 use serde_json::{json, Value};
 use spinfoil_lang::{CollectedOutput, OutputSink, Session, SessionSettings};
@@ -32,7 +33,7 @@ pub struct RunSummary {
 
 /// Runs every non-empty code cell of `notebook` in order, replacing its outputs.
 pub fn run_notebook(notebook: &mut Notebook, settings: &RunSettings) -> RunSummary {
-    let mut session = Session::new(settings.session.clone());
+    let mut session = SessionCells::new(Session::new(settings.session.clone()));
     let mut displays = DisplayIndex::default();
     let mut summary = RunSummary::default();
     for (index, cell) in notebook.cells().into_iter().enumerate() {
@@ -58,7 +59,7 @@ pub fn run_notebook(notebook: &mut Notebook, settings: &RunSettings) -> RunSumma
 
 fn run_cell(
     notebook: &mut Notebook,
-    session: &mut Session,
+    session: &mut SessionCells,
     index: usize,
     code: &str,
     count: usize,

@@ -2,5 +2,6 @@
 mod atomic_save;
 mod command_line;
 mod robustness;
+mod rust_cells;
 mod shards;
 mod support;

@@ -40,7 +40,7 @@ impl ShellHandlers {
         self.worker
             .run(move |session| {
                 crate::jupyter::test_hooks::panic_if_asked(&code);
-                session.eval(&code, sink)
+                crate::rust_cells::eval_cell(session, &code, sink)
             })
             .await
             .unwrap_or_else(|| Err(crashed()))
