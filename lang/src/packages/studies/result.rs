@@ -66,10 +66,16 @@ pub(crate) fn row_key(name: &str, unit: &str) -> String {
         "°" => "deg".into(),
         "%" => "pct".into(),
         "rev/s" => "rps".into(),
-        u => u.replace(['/', '·', ' '], "_"),
+        u => ascii_key(&u.replace('³', "3").replace('²', "2").replace('µ', "u")),
     };
-    let name: String = name.chars().map(|c| if c.is_alphanumeric() { c.to_ascii_lowercase() } else { '_' }).collect();
+    let name = ascii_key(name);
     if name.ends_with(&format!("_{unit}")) || unit.is_empty() { name } else { format!("{name}_{unit}") }
+}
+
+/// `text` in lower case with every character but ASCII letters and digits turned into `_`, so a
+/// key reads as `row.key` in scripts (`g/cm³` gives `g_cm3`).
+fn ascii_key(text: &str) -> String {
+    text.chars().map(|c| if c.is_ascii_alphanumeric() { c.to_ascii_lowercase() } else { '_' }).collect()
 }
 
 /// Registers the `Study` type and its fields.
