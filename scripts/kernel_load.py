@@ -56,7 +56,7 @@ let d = disc("P-7 rim-heavy", driver_outline(#{ diameter_cm: 21.1 }),
              rim_layup(rim, plate, #{ split_radius_cm: 8.4 }), #{ mass_g: 174 });
 let t = throw_release(#{ speed_mps: 24, spin_rpm: 1100, launch_deg: 10, nose_deg: 1, hyzer_deg: 5 });
 let s = dispersion(d, t, environment(#{}), #{ count: COUNT, seed: 7,
-    scatter: #{ speed_mps: normal(0, 0.8), hyzer_deg: normal(0, 3), launch_deg: uniform(-1, 1) },
+    scatter: #{ speed_mps: normal(0.0, 0.8), hyzer_deg: normal(0.0, 3.0), launch_deg: uniform(-1.0, 1.0) },
     target: #{ x_m: 90, y_m: 0, radius_m: 10 } });
 print(`rows: ${s.rows.len()}`);
 """
@@ -72,7 +72,7 @@ def dispersion_peak(count):
     elapsed = time.perf_counter() - began
     out = child.stdout.read()
     rows = [line for line in out.splitlines() if line.startswith("rows:")]
-    print(f"dispersion of {count} throws: peak RSS {usage.ru_maxrss / 1024:.1f} MB, {elapsed:.1f} s, "
+    print(f"dispersion of {count} throws: peak RSS {usage.ru_maxrss / 1024:.1f} MB, {elapsed:.1f} s, summary "
           f"{rows[-1] if rows else 'no rows line: ' + child.stderr.read()[-500:]}")
 
 
