@@ -1,4 +1,5 @@
 //! The command line's grammar (clap).
+use crate::sandbox_args::SandboxArgs;
 use clap::{Args, Parser, Subcommand, ValueEnum};
 use std::path::PathBuf;
 
@@ -36,12 +37,19 @@ pub enum Command {
     Kernel {
         /// The connection file Jupyter wrote.
         connection_file: PathBuf,
+        /// The study folder (default: the current folder, where Jupyter starts the kernel: the
+        /// notebook's folder), read-only folders and the time limit of a cell.
+        #[command(flatten)]
+        sandbox: SandboxArgs,
     },
     /// Open an interactive prompt with line editing, history and multi-line input.
     Shell {
         /// Folder for charts shown at the prompt.
         #[arg(long, default_value = "spinfoil-out")]
         out: PathBuf,
+        /// The study folder (default: the current folder), read-only folders, cell time limit.
+        #[command(flatten)]
+        sandbox: SandboxArgs,
     },
 }
 
@@ -60,6 +68,9 @@ pub struct RunArgs {
     /// (partial-*.json) into the output folder; merge them with `spinfoil merge`.
     #[arg(long, value_name = "i/N", value_parser = parse_shard)]
     pub shard: Option<spinfoil_engine::Shard>,
+    /// The study folder (default: the script's folder), read-only folders, cell time limit.
+    #[command(flatten)]
+    pub sandbox: SandboxArgs,
 }
 
 /// `spinfoil merge`.
@@ -95,6 +106,9 @@ pub struct ReportArgs {
     /// Run the remaining cells after one fails (the exit code is still 1).
     #[arg(long)]
     pub keep_going: bool,
+    /// The study folder (default: the notebook's folder), read-only folders, cell time limit.
+    #[command(flatten)]
+    pub sandbox: SandboxArgs,
 }
 
 /// `spinfoil install-kernel`: exactly one place, the user's folder by default.

@@ -1,10 +1,11 @@
 //! Each subcommand, calling the library and reporting in the terminal.
 use crate::cli::{Command, InstallArgs, MergeArgs, ReportArgs, RunArgs, TableFormat};
+use crate::sandbox_args::{folder_of, SandboxArgs};
 use anyhow::Context;
 use spinfoil_kernel::kernelspec::{install, InstallTarget};
 use spinfoil_kernel::notebook::{html_report, run_notebook, Notebook, RunSettings};
 use spinfoil_kernel::script::{run_prompt, run_script, ProgressBoardSink, ScriptSettings, TableExport};
-use std::path::PathBuf;
+use std::path::{Path, PathBuf};
 use std::sync::Arc;
 
 /// How a command ended, when it did not fail to run.
@@ -22,12 +23,13 @@ pub fn dispatch(command: Command) -> anyhow::Result<Outcome> {
         Command::Report(args) => report(args),
         Command::Merge(args) => merge(args),
         Command::InstallKernel(args) => install_kernel(args),
-        Command::Kernel { connection_file } => {
-            spinfoil_kernel::jupyter::run_kernel(&connection_file).context("the kernel stopped")?;
+        Command::Kernel { connection_file, sandbox } => {
+            let settings = sandbox.settings(Path::new("."));
+            spinfoil_kernel::jupyter::run_kernel_with(&connection_file, settings).context("the kernel stopped")?;
             Ok(Outcome::Done)
         }
-        Command::Shell { out } => {
-            run_prompt(&out)?;
+        Command::Shell { out, sandbox } => {
+            run_prompt(&out, sandbox.settings(Path::new(".")))?;
             Ok(Outcome::Done)
         }
     }
@@ -50,7 +52,7 @@ fn run(args: RunArgs) -> anyhow::Result<Outcome> {
         std::env::set_var(SHARD_VAR, shard.to_string());
         std::env::set_var(SHARD_DIR_VAR, &args.out);
     }
-    run_and_report(&args.script, args.out, args.tables)
+    run_and_report(&args.script, args.out, args.tables, &args.sandbox)
 }
 
 /// Writes OUT/merge.rhai (which shows every merged study) and runs it on FOLDER's partial files.
@@ -60,11 +62,12 @@ fn merge(args: MergeArgs) -> anyhow::Result<Outcome> {
     let code = "// Merges the partial results of a sharded run (spinfoil merge).\nfor study in merge_shards() { show(study); }\n";
     std::fs::write(&script, code).with_context(|| format!("cannot write {}", script.display()))?;
     std::env::set_var(SHARD_DIR_VAR, &args.folder);
-    run_and_report(&script, args.out, args.tables)
+    run_and_report(&script, args.out.clone(), args.tables, &SandboxArgs { study_dir: Some(args.out), ..SandboxArgs::default() })
 }
 
-fn run_and_report(script: &std::path::Path, out: PathBuf, tables: Option<TableFormat>) -> anyhow::Result<Outcome> {
-    let outcome = run_script(script, &ScriptSettings { out_dir: out, export: table_export(tables) })?;
+fn run_and_report(script: &Path, out: PathBuf, tables: Option<TableFormat>, sandbox: &SandboxArgs) -> anyhow::Result<Outcome> {
+    let session = sandbox.settings(&folder_of(script));
+    let outcome = run_script(script, &ScriptSettings { out_dir: out, export: table_export(tables), session: Some(session) })?;
     if outcome.write_failures > 0 {
         anyhow::bail!("{} output file(s) could not be written", outcome.write_failures);
     }
@@ -80,7 +83,8 @@ fn run_and_report(script: &std::path::Path, out: PathBuf, tables: Option<TableFo
 fn report(args: ReportArgs) -> anyhow::Result<Outcome> {
     let mut notebook = Notebook::load(&args.notebook)?;
     let observer = Arc::new(ProgressBoardSink::default());
-    let settings = RunSettings { keep_going: args.keep_going, observer: Some(observer), ..RunSettings::default() };
+    let session = args.sandbox.settings(&folder_of(&args.notebook));
+    let settings = RunSettings { keep_going: args.keep_going, observer: Some(observer), session };
     let summary = run_notebook(&mut notebook, &settings);
     let (executed, html) = write_report(&notebook, &args)?;
     println!("{} code cells run; wrote {} and {}", summary.cells_run, executed.display(), html.display());

@@ -1,6 +1,7 @@
 //! The `spinfoil` binary: glue between the command line and the library's hosts.
 mod cli;
 mod commands;
+mod sandbox_args;
 
 use clap::Parser;
 use std::process::ExitCode;

@@ -38,11 +38,19 @@ pub enum KernelError {
     Runtime(#[from] std::io::Error),
 }
 
-/// Runs the kernel for the connection file at `path` until Jupyter shuts it down.
+/// Runs the kernel for the connection file at `path` until Jupyter shuts it down, with the
+/// session's defaults and the current folder (where Jupyter starts a kernel: the notebook's
+/// folder) as the study folder.
 pub fn run_kernel(path: &Path) -> Result<(), KernelError> {
+    run_kernel_with(path, spinfoil_lang::SessionSettings::in_folder("."))
+}
+
+/// Runs the kernel for the connection file at `path` with a session of `settings` (study
+/// folder, read-only folders, limits) until Jupyter shuts it down.
+pub fn run_kernel_with(path: &Path, settings: spinfoil_lang::SessionSettings) -> Result<(), KernelError> {
     let info = ConnectionInfo::load(path)?;
     let runtime = tokio::runtime::Builder::new_multi_thread().worker_threads(2).enable_all().build()?;
-    runtime.block_on(server::serve(info))?;
+    runtime.block_on(server::serve(info, settings))?;
     runtime.shutdown_timeout(std::time::Duration::from_millis(200));
     Ok(())
 }

@@ -16,7 +16,7 @@ const QUEUE_DRAIN_MS: u64 = 2;
 
 /// Serves Jupyter clients on the ports of `info` until a `shutdown_request` arrives; messages
 /// over the cap of [`KernelLimits::from_env`] are dropped.
-pub async fn serve(info: ConnectionInfo) -> ZmqResult<()> {
+pub async fn serve(info: ConnectionInfo, settings: SessionSettings) -> ZmqResult<()> {
     let signer = Signer::new(&info.key);
     let limits = KernelLimits::from_env();
     limits.apply_to_transport();
@@ -28,7 +28,7 @@ pub async fn serve(info: ConnectionInfo) -> ZmqResult<()> {
     iopub.send(WireMessage::orphan("status", &session_id, serde_json::json!({"execution_state": "starting"})));
     tokio::spawn(publish_all(sockets.iopub, queued, signer.clone()));
     tokio::spawn(echo_heartbeats(sockets.heartbeat));
-    let worker = Worker::start(SessionSettings::default());
+    let worker = Worker::start(settings);
     tokio::spawn(interrupt_on_sigint(worker.clone()));
     let shell = ShellHandlers::new(worker.clone(), iopub.clone());
     tokio::spawn(shell_loop(sockets.shell, shell, iopub.clone(), intake("shell")));

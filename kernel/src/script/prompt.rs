@@ -20,14 +20,15 @@ pub enum PromptError {
     Terminal(#[from] ReadlineError),
 }
 
-/// Runs the prompt until end of input (Ctrl-D); charts go into `out_dir`.
-pub fn run_prompt(out_dir: &Path) -> Result<(), PromptError> {
+/// Runs the prompt until end of input (Ctrl-D) in a session with `settings`; charts go into
+/// `out_dir`.
+pub fn run_prompt(out_dir: &Path, settings: SessionSettings) -> Result<(), PromptError> {
     let mut editor = DefaultEditor::new()?;
     let history = history_file();
     if let Some(file) = &history {
         let _ = editor.load_history(file);
     }
-    let mut session = Session::new(SessionSettings::default());
+    let mut session = Session::new(settings);
     stop_cells_on_ctrl_c(session.interrupt_handle());
     let sink = Arc::new(TerminalSink::new(out_dir, None));
     println!("Spinfoil {} - type help() for the functions, Ctrl-D to leave.", env!("CARGO_PKG_VERSION"));

@@ -12,11 +12,14 @@ pub struct ScriptSettings {
     pub out_dir: PathBuf,
     /// Also write each table as CSV or JSON (default none).
     pub export: Option<TableExport>,
+    /// The session's settings (default `None`: the defaults with the script's own folder as the
+    /// study folder).
+    pub session: Option<SessionSettings>,
 }
 
 impl Default for ScriptSettings {
     fn default() -> Self {
-        Self { out_dir: PathBuf::from("spinfoil-out"), export: None }
+        Self { out_dir: PathBuf::from("spinfoil-out"), export: None, session: None }
     }
 }
 
@@ -45,10 +48,11 @@ pub enum ScriptError {
     },
 }
 
-/// Runs the script at `path`; its folder is the study folder (where `save` and `load` work).
+/// Runs the script at `path`; its folder is the study folder (where `save` and `load` work)
+/// unless `settings.session` says otherwise.
 pub fn run_script(path: &Path, settings: &ScriptSettings) -> Result<ScriptOutcome, ScriptError> {
     let code = std::fs::read_to_string(path).map_err(|source| ScriptError::Read { path: path.display().to_string(), source })?;
-    let mut session = Session::new(SessionSettings::for_script(path));
+    let mut session = Session::new(settings.session.clone().unwrap_or_else(|| SessionSettings::for_script(path)));
     let sink = Arc::new(TerminalSink::new(&settings.out_dir, settings.export));
     let outcome = session.eval(&code, sink.clone());
     sink.end_cell();

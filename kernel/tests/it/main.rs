@@ -2,6 +2,7 @@
 mod atomic_save;
 mod command_line;
 mod robustness;
+mod sandbox_options;
 mod rust_cells;
 mod shards;
 mod support;
