@@ -252,6 +252,15 @@ fn calibration_recovers_the_density_ratio_as_force_scales() {
     for label in ["S18 x", "S24 z", "time since release", "predicted − measured"] {
         assert!(chart.contains(label), "residual chart lacks {label}");
     }
+    // The fitted set flies a new throw (21 m/s, not among the measured) nearer the truth.
+    value(&mut s, "let t = throw_release(#{ speed_mps: 21, spin_rps: 15, launch_deg: 10 }); let fitted = calibrated(one_piece, r);");
+    let truth = number(&mut s, "fly(one_piece, t, thin).carry_m");
+    let before = number(&mut s, "fly(one_piece, t, environment()).carry_m");
+    let after = number(&mut s, "fly(fitted, t, environment()).carry_m");
+    println!("carry at 2000 m {truth:.2} m; sea-level set {before:.2} m; calibrated set {after:.2} m");
+    assert!((after - truth).abs() < 0.2 * (before - truth).abs(), "calibrated {after} vs truth {truth} (uncalibrated {before})");
+    let e = error(&mut s, "calibrated(one_piece, sweep(one_piece, t, environment(), #{ input: \"throw.speed_mps\", values: [20.0], metrics: [\"carry_m\"] }))");
+    assert!(e.message.contains("calibrate()"), "{}", e.message);
     let e = error(&mut s, "calibrate(one_piece, environment(), m, #{ fit: [\"model.lift_scale\", \"model.lift_at_zero\", \"model.lift_slope_per_rad\"] })");
     assert!(e.message.contains("model.lift"), "unidentifiable coefficient named: {}", e.message);
     let e = error(&mut s, "measured_from_csv(\"flight,speed_mps\\nA,20\")");

@@ -47,6 +47,12 @@ pub(crate) fn register(reg: &mut Registrar, context: &PackageContext) {
     reg.getter("MeasuredFlights", "count", "number of flights", |m: &mut MeasuredValue| m.flights.len() as rhai::INT);
     reg.text(|m: &mut MeasuredValue| format!("{} measured flight(s)", m.flights.len()));
     let context = context.clone();
+    reg.engine.register_fn("calibrated", |ctx: NativeCallContext, d: DiscValue, s: StudyValue| calibrated(&ctx, &d, &s));
+    reg.doc(FnDoc::new(
+        "calibrated(disc: Disc, calibration: Study) -> Disc",
+        "The disc with the fitted values of a calibrate() result in its coefficient set (scale factors folded into the linear coefficients: lift on C_L0 and C_Lα, drag on C_D0 and C_Dα, pitch on C_M0, C_Mα and C_Mq), to fly new throws with the fitted set. Its set is named \"... (calibrated)\".",
+        "let fitted = calibrated(d, calibrate(d, environment(), m, #{ fit: [\"model.drag_scale\"] }));",
+    ));
     reg.engine.register_fn(
         "calibrate",
         move |ctx: NativeCallContext, d: DiscValue, e: EnvironmentValue, m: MeasuredValue, map: Map| fit(&ctx, &context, &d, &e, &m, map),
@@ -108,5 +114,23 @@ pub(crate) fn calibration_value(result: &CalibrationResult, design: &str) -> Stu
         let points = result.residuals.iter().filter(|r| r.flight == flight && r.quantity == quantity).map(|r| (r.time_s, r.residual)).collect();
         chart = chart.series(Series::new(format!("{flight} {}", plain_name(&quantity)), points));
     }
-    StudyValue::new(table, &chart)
+    let mut value = StudyValue::new(table, &chart);
+    value.fitted = result.parameters.iter().map(|p| (p.name.clone(), p.value)).collect();
+    value
+}
+
+/// `disc` with the fitted values of a calibration `study` in its coefficient set (scale factors
+/// folded into the linear set), named as calibrated.
+fn calibrated(ctx: &NativeCallContext, disc: &DiscValue, study: &StudyValue) -> Fallible<DiscValue> {
+    if study.fitted.is_empty() {
+        return Err(value_error(ctx, "calibrated() takes the result of calibrate(); this study fitted nothing".into()));
+    }
+    let release = spinfoil_engine::ReleasePose::default().with_speed_and_spin(20.0, 15.0);
+    let mut case = StudyCase::new(CaseDisc::Design { design: disc.design.clone() }, CaseModel::linear(disc.aero.clone()), release);
+    for (name, value) in &study.fitted {
+        case.set(name, *value).map_err(|e| value_error(ctx, e.to_string()))?;
+    }
+    let set = case.model.folded_linear().ok_or_else(|| value_error(ctx, "the disc's coefficient set is not linear".into()))?;
+    set.validate().map_err(|e| value_error(ctx, format!("the fitted set is not usable: {e}")))?;
+    Ok(DiscValue { aero_name: format!("{} (calibrated)", disc.aero_name), aero: set, ..disc.clone() })
 }

@@ -12,12 +12,14 @@ pub(crate) struct StudyValue {
     pub table: Table,
     /// The chart's rendering (SVG and a text summary).
     pub chart: MimeBundle,
+    /// A calibration's fitted inputs (`model.*` name, value); empty for other studies.
+    pub fitted: Vec<(String, f64)>,
 }
 
 impl StudyValue {
     /// A result from its table and chart.
     pub fn new(table: Table, chart: &impl Render) -> Self {
-        Self { table, chart: chart.render() }
+        Self { table, chart: chart.render(), fitted: Vec::new() }
     }
 
     /// Table and chart in one display: the table's text, HTML and JSON, the chart's SVG inline
