@@ -2,26 +2,25 @@
 //! 50 % and 95 % ellipses, over the landing zones a study was given (target circle, fairway).
 
 use super::axes::{self, plot_px, Plot};
-use super::font;
 use super::bounds::Bounds;
 use super::data::{Axis, Series};
 use super::frame::{Drawn, Frame};
 use super::legend::{LegendEntry, Swatch};
 use super::spread::Spread;
-use crate::display::style::{series_colour, text_width_px, CHART_WIDTH_PX, INK, PLOT_BACKGROUND, SMALL_PX};
+use crate::display::style::{series_colour, CHART_WIDTH_PX, INK};
 use crate::display::Render;
 use crate::MimeBundle;
-use plotters::element::{Circle, EmptyElement, PathElement, Polygon, Rectangle, Text};
+use plotters::element::{Circle, EmptyElement, PathElement, Polygon};
 use plotters::series::DashedLineSeries;
-use plotters::style::text_anchor::{HPos, VPos};
 use plotters::style::{Color, RGBColor};
 
 const PLOT_HEIGHT_PX: f64 = 340.0;
 const ELLIPSE_VERTICES: usize = 96;
-/// Colour of landing zones (outline; the fill is a light tint of it).
-const ZONE_COLOUR: RGBColor = RGBColor(46, 125, 50);
-/// The zone colour's tint for the legend swatch (about 35 % on white).
-const ZONE_SWATCH: RGBColor = RGBColor(182, 211, 183);
+/// Colours of landing zones, in the order given (outline; the fill is a light tint of it): green,
+/// then purple, so a target and a fairway are told apart in the legend.
+const ZONE_COLOURS: [RGBColor; 2] = [RGBColor(46, 125, 50), RGBColor(123, 31, 162)];
+/// The zone colours' tints for the legend swatches (about 35 % on white).
+const ZONE_SWATCHES: [RGBColor; 2] = [RGBColor(182, 211, 183), RGBColor(215, 188, 227)];
 
 /// A labelled landing zone: closed rings of (x, y) points (a circle as a polygon, a fairway as
 /// rounded strips), drawn under the clouds with a light fill and an outline.
@@ -58,7 +57,7 @@ impl ScatterEllipses {
 
     /// Adds a labelled zone (a target circle, a fairway): closed rings of (x, y) points, in the
     /// axes' units, drawn with a light fill and an outline under the clouds and named in the
-    /// legend and beside the zone.
+    /// legend.
     pub fn zone(mut self, label: impl Into<String>, rings: Vec<Vec<(f64, f64)>>) -> Self {
         self.zones.push(ZoneShape { label: label.into(), rings });
         self
@@ -76,7 +75,7 @@ impl ScatterEllipses {
         legend.push(LegendEntry::new(Swatch::Cross(INK), "mean"));
         legend.push(LegendEntry::new(Swatch::Line(INK), "50 % ellipse"));
         legend.push(LegendEntry::new(Swatch::Dashed(INK), "95 % ellipse"));
-        legend.extend(self.zones.iter().map(|z| LegendEntry::new(Swatch::Block(ZONE_SWATCH), z.label.clone())));
+        legend.extend(self.zones.iter().enumerate().map(|(i, z)| LegendEntry::new(Swatch::Block(ZONE_SWATCHES[i % 2]), z.label.clone())));
         let scale = if self.landing_zone { "; equal scales on both axes" } else { "" };
         let frame = Frame::new(&self.title).subtitle(format!("Ellipses from each cloud's mean and covariance{scale}")).legend(legend);
         if self.landing_zone { frame.caution() } else { frame }
@@ -95,14 +94,12 @@ impl ScatterEllipses {
         let bounds = if self.landing_zone { bounds.equal_scale(plot_px((CHART_WIDTH_PX, body_px))) } else { bounds };
         self.frame().draw(body_px, |area| {
             let mut plot = axes::draw_axes(area, bounds, &self.x, &self.y)?;
-            for zone in &self.zones {
-                draw_zone(&mut plot, zone)?;
+            // Zones are named in the legend (a label inside the plot would cover the clouds).
+            for (index, zone) in self.zones.iter().enumerate() {
+                draw_zone(&mut plot, zone, ZONE_COLOURS[index % 2])?;
             }
             for (index, cloud) in self.clouds.iter().enumerate() {
                 draw_cloud(&mut plot, cloud, index)?;
-            }
-            for zone in &self.zones {
-                draw_zone_label(&mut plot, zone)?;
             }
             Ok(())
         })
@@ -113,28 +110,12 @@ impl ScatterEllipses {
     }
 }
 
-/// A zone: light fill and solid outline (under the clouds).
-fn draw_zone(plot: &mut Plot, zone: &ZoneShape) -> Drawn {
+/// A zone: light fill and solid outline in `colour` (under the clouds).
+fn draw_zone(plot: &mut Plot, zone: &ZoneShape, colour: RGBColor) -> Drawn {
     for ring in zone.rings.iter().filter(|r| r.len() >= 3) {
-        plot.draw_series(std::iter::once(Polygon::new(ring.clone(), ZONE_COLOUR.mix(0.12).filled())))?;
-        plot.draw_series(std::iter::once(PathElement::new(ring.clone(), ZONE_COLOUR.stroke_width(2))))?;
+        plot.draw_series(std::iter::once(Polygon::new(ring.clone(), colour.mix(0.12).filled())))?;
+        plot.draw_series(std::iter::once(PathElement::new(ring.clone(), colour.stroke_width(2))))?;
     }
-    Ok(())
-}
-
-/// A zone's label on a light backing, centred above the zone (over the clouds, so it stays
-/// readable): at the mean x of its outline and its highest y.
-fn draw_zone_label(plot: &mut Plot, zone: &ZoneShape) -> Drawn {
-    let points: Vec<(f64, f64)> = zone.rings.iter().flatten().copied().filter(|p| p.0.is_finite() && p.1.is_finite()).collect();
-    if points.is_empty() {
-        return Ok(());
-    }
-    let x = points.iter().map(|p| p.0).sum::<f64>() / points.len() as f64;
-    let y = points.iter().map(|p| p.1).fold(f64::NEG_INFINITY, f64::max);
-    let half = (0.5 * text_width_px(&zone.label, SMALL_PX)).ceil() as i32 + 3;
-    let backing = Rectangle::new([(-half, -SMALL_PX as i32 - 8), (half, -2)], PLOT_BACKGROUND.mix(0.85).filled());
-    let style = font::anchored(font::text(SMALL_PX, ZONE_COLOUR), HPos::Center, VPos::Bottom);
-    plot.draw_series(std::iter::once(EmptyElement::at((x, y)) + backing + Text::new(zone.label.clone(), (0, -4), style)))?;
     Ok(())
 }
 
