@@ -19,6 +19,7 @@ fn run_in(folder: &Path, book: &mut Notebook) -> RunSummary {
 }
 
 /// All text a cell printed on one stream.
+#[cfg(feature = "rust-cells")]
 fn stream(book: &Notebook, cell: usize, name: &str) -> String {
     book.outputs(cell).iter().filter(|o| o["output_type"] == "stream" && o["name"] == name).filter_map(|o| o["text"].as_str()).collect()
 }
