@@ -36,7 +36,11 @@ def run_with_nbclient(path):
 def executed_once(path):
     notebook = nbformat.read(path, as_version=4)
     try:
-        NotebookClient(notebook, kernel_name="spinfoil", timeout=120, allow_errors=False).execute()
+        # The kernel starts in the notebook's folder, as in Jupyter: its study folder, where the
+        # notebooks' generated files go (ignored by notebooks/.gitignore).
+        client = NotebookClient(notebook, kernel_name="spinfoil", timeout=120, allow_errors=False,
+                                resources={"metadata": {"path": str(path.parent)}})
+        client.execute()
     except Exception as failure:  # noqa: BLE001 - handed on to every caller
         return notebook, failure
     return notebook, None
