@@ -1,16 +1,11 @@
 //! Integration tests: the domain packages, driven through scripts, with values equal to the
 //! engine's (the engine is called directly with the same inputs in SI units).
-use super::session::{error, value};
+use super::session::{error, number, value};
 use spinfoil_engine::{Dimension, DiscFamily, Layup, Material, ParametricOutline, SamplingSettings};
 use spinfoil_lang::{Session, SessionSettings};
 
 fn session() -> Session {
     Session::new(SessionSettings::default())
-}
-
-fn number(s: &mut Session, code: &str) -> f64 {
-    let text = value(s, code);
-    text.parse().unwrap_or_else(|_| panic!("not a number: {text} from {code}"))
 }
 
 /// Asserts a script's number equals the engine's to 1e-12 relative (scripts print floats

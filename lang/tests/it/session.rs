@@ -19,6 +19,12 @@ pub fn value(session: &mut Session, code: &str) -> String {
     }
 }
 
+/// The value of a cell that must give a number.
+pub fn number(session: &mut Session, code: &str) -> f64 {
+    let text = value(session, code);
+    text.parse().unwrap_or_else(|_| panic!("not a number: {text} from {code}"))
+}
+
 /// The error of a cell that must fail.
 pub fn error(session: &mut Session, code: &str) -> CellError {
     match run(session, code).0 {

@@ -1,6 +1,6 @@
 //! Integration tests: studies in scripts (sweep, dispersion, signature, best_release), their
 //! tables and charts, option errors, determinism, progress and interrupts.
-use super::session::{error, run, value};
+use super::session::{error, number, run, value};
 use spinfoil_lang::{OutputEvent, Session, SessionSettings};
 use std::time::{Duration, Instant};
 
@@ -19,11 +19,6 @@ fn session() -> Session {
     let mut s = Session::new(SessionSettings::default());
     value(&mut s, SETUP);
     s
-}
-
-fn number(s: &mut Session, code: &str) -> f64 {
-    let text = value(s, code);
-    text.parse().unwrap_or_else(|_| panic!("not a number: {text} from {code}"))
 }
 
 /// The SVG of a study's chart.

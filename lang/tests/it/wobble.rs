@@ -1,6 +1,6 @@
 //! Integration tests: wobble in scripts (a release wobbling by an angle, the flight's wobble
 //! fields, the wobble chart), with values equal to the engine's.
-use super::session::{error, value};
+use super::session::{error, number, value};
 use spinfoil_engine::{
     fly, release_with_wobble, wobble_rate_for_angle, DiscBody, FlightConditions, FlightSettings, Hand, ReleasePose, Style,
 };
@@ -20,11 +20,6 @@ fn session() -> Session {
     let mut s = Session::new(SessionSettings::default());
     value(&mut s, SETUP);
     s
-}
-
-fn number(s: &mut Session, code: &str) -> f64 {
-    let text = value(s, code);
-    text.parse().unwrap_or_else(|_| panic!("not a number: {text} from {code}"))
 }
 
 /// The body of a disc named in the session, from its script fields (SI).
