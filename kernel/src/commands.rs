@@ -1,6 +1,6 @@
 //! Each subcommand, calling the library and reporting in the terminal.
 use crate::cli::{Command, InstallArgs, MergeArgs, ReportArgs, RunArgs, TableFormat};
-use crate::sandbox_args::{folder_of, SandboxArgs};
+use crate::sandbox_args::SandboxArgs;
 use anyhow::Context;
 use spinfoil_kernel::kernelspec::{install, InstallTarget};
 use spinfoil_kernel::notebook::{html_report, run_notebook, Notebook, RunSettings};
@@ -24,12 +24,12 @@ pub fn dispatch(command: Command) -> anyhow::Result<Outcome> {
         Command::Merge(args) => merge(args),
         Command::InstallKernel(args) => install_kernel(args),
         Command::Kernel { connection_file, sandbox } => {
-            let settings = sandbox.settings(Path::new("."));
+            let settings = sandbox.settings(None);
             spinfoil_kernel::jupyter::run_kernel_with(&connection_file, settings).context("the kernel stopped")?;
             Ok(Outcome::Done)
         }
         Command::Shell { out, sandbox } => {
-            run_prompt(&out, sandbox.settings(Path::new(".")))?;
+            run_prompt(&out, sandbox.settings(None))?;
             Ok(Outcome::Done)
         }
     }
@@ -66,7 +66,7 @@ fn merge(args: MergeArgs) -> anyhow::Result<Outcome> {
 }
 
 fn run_and_report(script: &Path, out: PathBuf, tables: Option<TableFormat>, sandbox: &SandboxArgs) -> anyhow::Result<Outcome> {
-    let session = sandbox.settings(&folder_of(script));
+    let session = sandbox.settings(Some(script));
     let outcome = run_script(script, &ScriptSettings { out_dir: out, export: table_export(tables), session: Some(session) })?;
     if outcome.write_failures > 0 {
         anyhow::bail!("{} output file(s) could not be written", outcome.write_failures);
@@ -83,7 +83,7 @@ fn run_and_report(script: &Path, out: PathBuf, tables: Option<TableFormat>, sand
 fn report(args: ReportArgs) -> anyhow::Result<Outcome> {
     let mut notebook = Notebook::load(&args.notebook)?;
     let observer = Arc::new(ProgressBoardSink::default());
-    let session = args.sandbox.settings(&folder_of(&args.notebook));
+    let session = args.sandbox.settings(Some(&args.notebook));
     let settings = RunSettings { keep_going: args.keep_going, observer: Some(observer), session };
     let summary = run_notebook(&mut notebook, &settings);
     let (executed, html) = write_report(&notebook, &args)?;

@@ -21,22 +21,18 @@ pub struct SandboxArgs {
 }
 
 impl SandboxArgs {
-    /// The session settings: the defaults, with these folders and limit; `default_dir` is the
-    /// study folder when none was given.
-    pub fn settings(&self, default_dir: &Path) -> SessionSettings {
-        let defaults = SessionSettings::default();
+    /// The session settings: the defaults, with these folders and limit. Without
+    /// `--study-dir`, the study folder is the folder of `file` (a script or notebook), else the
+    /// current folder.
+    pub fn settings(&self, file: Option<&Path>) -> SessionSettings {
+        let defaults = file.map_or_else(|| SessionSettings::in_folder("."), SessionSettings::for_script);
         SessionSettings {
-            study_dir: Some(self.study_dir.clone().unwrap_or_else(|| default_dir.to_path_buf())),
+            study_dir: self.study_dir.clone().or(defaults.study_dir.clone()),
             extra_dirs: self.read_dirs.clone(),
             max_cell_time: self.max_cell_seconds.unwrap_or(defaults.max_cell_time),
             ..defaults
         }
     }
-}
-
-/// The folder holding `file` (`.` for a bare file name).
-pub fn folder_of(file: &Path) -> PathBuf {
-    file.parent().filter(|p| !p.as_os_str().is_empty()).unwrap_or(Path::new(".")).to_path_buf()
 }
 
 /// `--max-cell-seconds`: a positive, finite number of seconds.
@@ -54,9 +50,11 @@ mod tests {
 
     #[test]
     fn defaults_put_the_study_folder_beside_the_file() {
-        let settings = SandboxArgs::default().settings(&folder_of(Path::new("studies/kestrel.rhai")));
+        let settings = SandboxArgs::default().settings(Some(Path::new("studies/kestrel.rhai")));
         assert_eq!(settings.study_dir, Some(PathBuf::from("studies")));
-        assert_eq!(folder_of(Path::new("kestrel.rhai")), PathBuf::from("."));
+        let bare = SandboxArgs::default().settings(Some(Path::new("kestrel.rhai")));
+        assert_eq!(bare.study_dir, Some(PathBuf::from(".")));
+        assert_eq!(SandboxArgs::default().settings(None).study_dir, Some(PathBuf::from(".")));
         assert_eq!(settings.max_cell_time, SessionSettings::default().max_cell_time);
     }
 
