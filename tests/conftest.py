@@ -15,8 +15,13 @@ REPO = pathlib.Path(__file__).resolve().parent.parent
 
 
 def run_example(package: str, name: str, *args: str, stdin: str | None = None) -> str:
-    """Runs `cargo run --release -q -p PACKAGE --example NAME -- ARGS` and returns its stdout."""
-    cmd = ["cargo", "run", "--release", "-q", "-p", package, "--example", name, "--", *args]
+    """Runs `cargo run -q -p PACKAGE --example NAME -- ARGS` and returns its stdout.
+
+    The debug profile's examples are the ones `scripts/test-all` has already built (our crates at
+    opt-level 1, dependencies at 2: each example runs in about a second), so the checks add no
+    release build to a test run.
+    """
+    cmd = ["cargo", "run", "-q", "-p", package, "--example", name, "--", *args]
     done = subprocess.run(cmd, cwd=REPO, input=stdin, capture_output=True, text=True, check=False)
     if done.returncode != 0:
         raise RuntimeError(f"{' '.join(cmd)} failed ({done.returncode}):\n{done.stderr}")
