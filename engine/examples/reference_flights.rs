@@ -80,7 +80,7 @@ pub fn seeded_throws() -> Vec<ReferenceThrow> {
 }
 
 fn seeded_throw(i: usize, rng: &mut ChaCha8Rng) -> ReferenceThrow {
-    let (body, model) = if i % 2 == 0 { (hummel_body(), hummel_2003()) } else { (demo_driver_body(), demo_driver()) };
+    let (body, model) = if i.is_multiple_of(2) { (hummel_body(), hummel_2003()) } else { (demo_driver_body(), demo_driver()) };
     let release = ReleaseState {
         speed_mps: rng.gen_range(14.0..26.0),
         spin_rad_s: rng.gen_range(50.0..110.0),

@@ -7,6 +7,7 @@
 //! Outside that range the standard library's `atan` is called.
 
 /// Numerator coefficients P (highest power first).
+#[allow(clippy::excessive_precision)] // digits as published in Cephes `atan.c`; they round to the same f64
 const P: [f64; 5] = [
     -8.750_608_600_031_904_122_785e-1,
     -1.615_753_718_733_365_076_637e1,
@@ -16,6 +17,7 @@ const P: [f64; 5] = [
 ];
 
 /// Denominator coefficients Q (highest power first; the leading 1 is implied).
+#[allow(clippy::excessive_precision)] // digits as published in Cephes `atan.c`; they round to the same f64
 const Q: [f64; 5] = [
     2.485_846_490_142_306_297_962e1,
     1.650_270_098_316_988_542_046e2,
@@ -29,6 +31,7 @@ const RATIONAL_LIMIT: f64 = 0.66;
 
 /// atan(x) in rad, in (−π/2, π/2); within about 2.2e-16 relative of `f64::atan`.
 #[inline]
+#[allow(clippy::neg_cmp_op_on_partial_ord)] // the negation sends NaN to the standard library
 pub(crate) fn atan(x: f64) -> f64 {
     if !(x.abs() <= RATIONAL_LIMIT) {
         return x.atan();

@@ -134,9 +134,12 @@ fn a_plausible_release_validates() {
     assert_eq!(valid_release().validated(), Ok(valid_release()));
 }
 
+/// A change that spoils one field of a valid release.
+type Spoil = fn(&mut ReleaseState);
+
 #[test]
 fn bad_release_values_name_field_value_and_range() {
-    let cases: [(&str, fn(&mut ReleaseState)); 12] = [
+    let cases: [(&str, Spoil); 12] = [
         ("speed_mps", |r| r.speed_mps = 50.0),
         ("speed_mps", |r| r.speed_mps = -1.0),
         ("speed_mps", |r| r.speed_mps = f64::NAN),

@@ -151,7 +151,7 @@ fn mass_bars(discs: &[DiscValue]) -> MassBars {
 }
 
 fn coefficient_curves(d: &DiscValue) -> CoefficientCurves {
-    let alphas: Vec<f64> = (-10..=30).map(|deg| f64::from(deg)).collect();
+    let alphas: Vec<f64> = (-10..=30).map(f64::from).collect();
     let curve = |f: &dyn Fn(f64) -> f64| alphas.iter().map(|a| (*a, f(a.to_radians()))).collect::<Vec<_>>();
     let aero = &d.aero;
     CoefficientCurves::new(format!("Coefficients of {} ({})", d.design.name, d.aero_name), aero.info.source.clone())

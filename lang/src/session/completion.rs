@@ -74,7 +74,7 @@ impl Session {
             .docs
             .fields
             .iter()
-            .filter(|f| type_name.as_ref().map_or(true, |t| *t == f.type_name))
+            .filter(|f| type_name.as_ref().is_none_or(|t| *t == f.type_name))
             .map(|f| f.field.clone());
         let methods =
             self.docs.functions.iter().filter(|d| {

@@ -30,7 +30,7 @@ impl InterruptHandle {
     /// The check at script operation number `operations`: the flag every time, the clock every
     /// 1 024 operations (reading the clock costs about as much as an operation).
     pub(crate) fn stops_at(&self, operations: u64) -> bool {
-        self.flag.load(Ordering::Relaxed) || (operations % 1024 == 0 && self.clock.expired())
+        self.flag.load(Ordering::Relaxed) || (operations.is_multiple_of(1024) && self.clock.expired())
     }
 
     /// True when the running cell ran out of wall time (and was not interrupted by a user).
