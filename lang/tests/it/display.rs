@@ -336,8 +336,9 @@ mod charts {
             assert!(svg::has_text(&doc, wanted), "missing {wanted:?}");
         }
         assert!(svg::count(&doc, "circle") >= 60, "every point drawn");
-        assert_eq!(svg::long_polylines(&doc, 90), 1, "the 50 % ellipse as one closed polyline (the 95 % one is dashed)");
-        assert!(svg::long_polylines(&doc, 0) > 20, "dashes of the 95 % ellipse");
+        assert_eq!(svg::long_polylines(&doc, 90), 2, "the 50 % and 95 % ellipses, each one closed polyline");
+        let dashed = doc.descendants().filter(|n| n.has_tag_name("polyline") && n.attribute("stroke-dasharray").is_some()).count();
+        assert_eq!(dashed, 1, "the 95 % ellipse dashed");
         assert!(svg::texts(&doc).iter().any(|t| t.contains("Predictions are estimates.")));
     }
 
@@ -378,9 +379,9 @@ mod charts {
         });
         let text = svg::of(&chart.render());
         let doc = svg::parse(&text);
-        assert_eq!(svg::long_polylines(&doc, 30), 7, "the first seven solid");
-        let dashes = svg::polyline_lengths(&doc).into_iter().filter(|n| *n == 2).count();
-        assert!(dashes > 20, "the eighth and ninth dashed: {dashes} dash segments");
+        assert_eq!(svg::long_polylines(&doc, 30), 9, "every series one polyline");
+        let dashed = doc.descendants().filter(|n| n.has_tag_name("polyline") && n.attribute("stroke-dasharray").is_some()).count();
+        assert_eq!(dashed, 2, "the eighth and ninth dashed, the first seven solid");
         for i in 0..9 {
             assert!(svg::has_text(&doc, &format!("s{i}")), "legend entry s{i}");
         }

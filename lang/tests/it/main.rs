@@ -1,6 +1,7 @@
 //! All spinfoil-lang integration tests, compiled into one binary.
 mod bad_input_page;
 mod bad_scripts;
+mod chart_lines;
 mod display;
 mod limits;
 mod packages;

@@ -146,7 +146,8 @@ fn signatures_compare_designs_and_match_the_battery_flights() {
     let signature = number(&mut s, "r.rows[0].carry_at_24_m");
     assert!((carry - signature).abs() < 1e-6 * carry, "{carry} vs {signature}");
     let chart = svg(&mut s, "r");
-    for label in ["P-7 one-piece: greatest turn bank", "P-7 rim-heavy: fade hook after apex", "release speed", "fade side positive"] {
+    // The legend names each design once (colour) and each measure once (line style).
+    for label in ["P-7 one-piece", "P-7 rim-heavy", "greatest turn bank", "fade hook after apex", "release speed", "fade side positive"] {
         assert!(chart.contains(label), "signature chart lacks {label}");
     }
     // Same effort: the rim-heavy design banks less toward the turn side at 28 m/s (precession

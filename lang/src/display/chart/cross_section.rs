@@ -10,7 +10,8 @@ use super::legend::{LegendEntry, Swatch};
 use crate::display::style::{series_colour, AXIS_INK, CHART_WIDTH_PX, INK, MUTED_INK, SMALL_PX, TEXT_PX};
 use crate::display::Render;
 use crate::MimeBundle;
-use plotters::element::{EmptyElement, PathElement, Polygon, Text};
+use super::fine_path::{draw_line, fill_polygon, Stroke};
+use plotters::element::{EmptyElement, PathElement, Text};
 use plotters::style::text_anchor::{HPos, VPos};
 use plotters::style::{Color, RGBColor};
 
@@ -111,10 +112,10 @@ impl CrossSection {
             let colour = self.colour_of(&region.material);
             for side in [1.0, -1.0] {
                 let points: Vec<(f64, f64)> = half.iter().map(|(r, z)| (side * r, *z)).collect();
-                plot.draw_series(std::iter::once(Polygon::new(points.clone(), colour.mix(0.55).filled())))?;
+                fill_polygon(plot, &points, colour, 0.55)?;
                 let mut closed = points;
                 closed.push(closed[0]);
-                plot.draw_series(std::iter::once(PathElement::new(closed, colour.stroke_width(1))))?;
+                draw_line(plot, &closed, Stroke::solid(colour, 1.0))?;
             }
         }
         Ok(())

@@ -56,12 +56,15 @@ pub struct Track {
     pub landing: Option<(f64, f64)>,
     /// Where the disc came to rest (m), if known.
     pub rest: Option<(f64, f64)>,
+    /// The path on the ground from first contact to rest (m), in the same plane; empty when
+    /// not known (the chart then draws a straight line from the landing to the rest point).
+    pub ground: Vec<(f64, f64)>,
 }
 
 impl Track {
     /// A track from a label and path points (m).
     pub fn new(label: impl Into<String>, points: Vec<(f64, f64)>) -> Self {
-        Self { label: label.into(), points, landing: None, rest: None }
+        Self { label: label.into(), points, landing: None, rest: None, ground: Vec::new() }
     }
 
     /// Sets the landing point (m).
@@ -76,9 +79,30 @@ impl Track {
         self
     }
 
-    /// Every finite point of the track, the markers included (for axis ranges).
+    /// Sets the path on the ground from first contact to rest (m).
+    pub fn ground(mut self, points: Vec<(f64, f64)>) -> Self {
+        self.ground = points;
+        self
+    }
+
+    /// The ground play to draw, from first contact to rest (m): the ground path when it has at
+    /// least two finite points, else the straight line from the landing to the rest point when
+    /// both are known and apart; empty when there is none.
+    pub(crate) fn ground_play(&self) -> Vec<(f64, f64)> {
+        let path = finite(&self.ground);
+        if path.len() >= 2 {
+            return path;
+        }
+        match (self.landing.filter(|p| point_is_finite(*p)), self.rest.filter(|p| point_is_finite(*p))) {
+            (Some(a), Some(b)) if (a.0 - b.0).hypot(a.1 - b.1) > 1e-6 => vec![a, b],
+            _ => Vec::new(),
+        }
+    }
+
+    /// Every finite point of the track, the markers and the ground path included (for axis
+    /// ranges).
     pub(crate) fn all_finite_points(&self) -> Vec<(f64, f64)> {
-        let markers = self.landing.iter().chain(self.rest.iter()).copied();
+        let markers = self.landing.iter().chain(self.rest.iter()).chain(self.ground.iter()).copied();
         finite(&self.points.iter().copied().chain(markers).collect::<Vec<_>>())
     }
 }

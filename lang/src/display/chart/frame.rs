@@ -1,6 +1,7 @@
 //! The frame every chart is drawn in: title strip, subtitle, legend strip, the chart body,
 //! captions and the safety caution below, and the "no data" and error fallbacks.
 
+use super::fine_path;
 use super::font;
 use super::legend::{self, LegendEntry, LEFT_PX};
 use crate::display::style::*;
@@ -129,7 +130,7 @@ impl Frame {
             self.draw_footer(&footer_area)?;
             root.present()?;
         }
-        Ok(finish_svg(svg, &self.title))
+        Ok(finish_svg(fine_path::expand(svg), &self.title))
     }
 
     fn draw_header(&self, root: &Area) -> Drawn {

@@ -1,11 +1,14 @@
 //! Our legend: a strip of entries above the plot, wrapped into rows, never over the data.
 
+use super::fine_path::Dash;
 use super::font;
 use super::frame::{Area, Drawn};
+use super::marker::{draw_marker, Marker};
+use super::track_marks::THROWER_TRIANGLE;
 use crate::display::style::{series_colour, text_width_px, CHART_WIDTH_PX, INK, SERIES_COLOURS, TEXT_PX};
 use plotters::element::{Circle, PathElement, Polygon, Rectangle, Text};
 use plotters::style::text_anchor::{HPos, VPos};
-use plotters::style::{Color, RGBColor};
+use plotters::style::{Color, RGBColor, WHITE};
 
 /// Left edge of the legend and title, in pixels.
 pub(crate) const LEFT_PX: i32 = 16;
@@ -25,12 +28,16 @@ pub(crate) enum Swatch {
     Dot(RGBColor),
     /// A hollow square (a rest point).
     Square(RGBColor),
-    /// A filled triangle (the thrower).
-    Triangle(RGBColor),
+    /// The thrower's triangle, pointing right, as drawn at the release point.
+    Thrower(RGBColor),
     /// A dashed line (a second kind of outline).
     Dashed(RGBColor),
     /// A plus-shaped cross (a mean).
     Cross(RGBColor),
+    /// A line in a dash pattern (a kind of line, keyed apart from the series' colours).
+    Stroke(RGBColor, Dash),
+    /// A short line with a point marker on it (a series drawn with markers).
+    Marked(RGBColor, Marker),
 }
 
 /// One legend entry.
@@ -99,7 +106,10 @@ fn draw_swatch(area: &Area, swatch: Swatch, (x, y): (i32, i32)) -> Drawn {
         Swatch::Block(c) => area.draw(&Rectangle::new([(x + 2, y - 6), (x + SWATCH_PX - 2, y + 6)], c.filled()))?,
         Swatch::Dot(c) => area.draw(&Circle::new(centre, 5, c.filled()))?,
         Swatch::Square(c) => area.draw(&Rectangle::new([(centre.0 - 5, y - 5), (centre.0 + 5, y + 5)], c.stroke_width(2)))?,
-        Swatch::Triangle(c) => area.draw(&Polygon::new(triangle(centre, 6), c.filled()))?,
+        Swatch::Thrower(c) => {
+            let corners: Vec<(i32, i32)> = THROWER_TRIANGLE.iter().map(|(dx, dy)| (centre.0 - 2 + dx, y + dy)).collect();
+            area.draw(&Polygon::new(corners, c.filled()))?
+        }
         Swatch::Dashed(c) => {
             for start in [0, 8, 16] {
                 area.draw(&PathElement::new(vec![(x + start, y), (x + start + 4, y)], c.stroke_width(2)))?;
@@ -109,11 +119,27 @@ fn draw_swatch(area: &Area, swatch: Swatch, (x, y): (i32, i32)) -> Drawn {
             area.draw(&PathElement::new(vec![(centre.0 - 6, y), (centre.0 + 6, y)], c.stroke_width(2)))?;
             area.draw(&PathElement::new(vec![(centre.0, y - 6), (centre.0, y + 6)], c.stroke_width(2)))?;
         }
+        Swatch::Stroke(c, dash) => draw_dashes(area, c, dash, (x, y))?,
+        Swatch::Marked(c, marker) => {
+            area.draw(&PathElement::new(vec![(x, y), (x + SWATCH_PX, y)], c.stroke_width(2)))?;
+            draw_marker(area, centre, (marker, 5), c, WHITE)?;
+        }
     }
     Ok(())
 }
 
-/// An upward triangle of half-size `half` pixels around `centre`.
-pub(crate) fn triangle((x, y): (i32, i32), half: i32) -> Vec<(i32, i32)> {
-    vec![(x, y - half), (x + half, y + half), (x - half, y + half)]
+/// A line across the swatch in `dash`'s pattern, 3 px wide.
+fn draw_dashes(area: &Area, colour: RGBColor, dash: Dash, (x, y): (i32, i32)) -> Drawn {
+    let (on, off) = match dash {
+        Dash::Solid => (SWATCH_PX, 0),
+        Dash::Pattern(on, off) => ((on.round() as i32).max(1), (off.round() as i32).max(1)),
+    };
+    let mut start = x;
+    while start < x + SWATCH_PX {
+        let end = (start + on).min(x + SWATCH_PX);
+        area.draw(&PathElement::new(vec![(start, y), (end, y)], colour.stroke_width(3)))?;
+        start = end + off;
+    }
+    Ok(())
 }
+

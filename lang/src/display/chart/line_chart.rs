@@ -9,11 +9,13 @@ use super::legend::{is_dashed, series_swatch, LegendEntry};
 use crate::display::style::series_colour;
 use crate::display::Render;
 use crate::MimeBundle;
+use super::fine_path::{draw_line, Dash, Stroke};
 use plotters::element::{Circle, PathElement};
-use plotters::series::DashedLineSeries;
 use plotters::style::{Color, RGBColor};
 
 const PLOT_HEIGHT_PX: f64 = 330.0;
+/// Width of a data line in pixels.
+pub(crate) const LINE_WIDTH_PX: f64 = 2.0;
 
 /// Several labelled series against one x axis and one y axis, e.g. speed against time for
 /// several flights. Non-finite points are skipped; no finite point gives a "no data" chart.
@@ -65,7 +67,7 @@ impl LineChart {
             if self.zero_line {
                 draw_zero_line(&mut plot, bounds)?;
             }
-            draw_series(&mut plot, &self.series, |index| index)
+            draw_series(&mut plot, &self.series, |index| index, false)
         })
     }
 }
@@ -90,24 +92,31 @@ pub(crate) fn series_bounds(series: &[Series]) -> Option<Bounds> {
 
 /// Draws each series in the style of palette slot `slot(index)` (its colour, dashed past the
 /// palette's length): a line, or a dot for a single point. Non-finite points are left out.
-pub(crate) fn draw_series(plot: &mut Plot, series: &[Series], slot: impl Fn(usize) -> usize) -> Drawn {
+/// `layered` draws the first series widest and each later one narrower, for series that may
+/// coincide (flights of nearly equal discs): the earlier ones then show as a coloured edge.
+pub(crate) fn draw_series(plot: &mut Plot, series: &[Series], slot: impl Fn(usize) -> usize, layered: bool) -> Drawn {
     for (index, one) in series.iter().enumerate() {
         let points = one.finite_points();
-        let (colour, dashed) = (series_colour(slot(index)), is_dashed(slot(index)));
-        match points.len() {
-            0 => {}
-            1 => {
-                plot.draw_series(std::iter::once(Circle::new(points[0], 4, colour.filled())))?;
-            }
-            _ if dashed => {
-                plot.draw_series(DashedLineSeries::new(points, 8, 5, colour.stroke_width(2)))?;
-            }
-            _ => {
-                plot.draw_series(std::iter::once(PathElement::new(points, colour.stroke_width(2))))?;
-            }
+        let colour = series_colour(slot(index));
+        if points.len() == 1 {
+            plot.draw_series(std::iter::once(Circle::new(points[0], 4, colour.filled())))?;
+            continue;
         }
+        let width_px = if layered { layered_width_px(index, series.len()) } else { LINE_WIDTH_PX };
+        let stroke = Stroke::solid(colour, width_px);
+        draw_line(plot, &points, if is_dashed(slot(index)) { stroke.dashed(Dash::DASHED) } else { stroke })?;
     }
     Ok(())
+}
+
+/// The width in pixels of line `index` of `count` layered lines: from 3.5 px for the first (drawn
+/// first, at the bottom) down to 2 px for the last; 2 px for a single line.
+pub(crate) fn layered_width_px(index: usize, count: usize) -> f64 {
+    if count <= 1 {
+        return LINE_WIDTH_PX;
+    }
+    let share = (count - 1 - index.min(count - 1)) as f64 / (count - 1) as f64;
+    LINE_WIDTH_PX + 1.5 * share
 }
 
 /// A thin dark line along y = 0 across the plot.

@@ -3,16 +3,20 @@
 mod axes;
 mod bounds;
 mod data;
+mod fine_path;
 mod font;
 mod frame;
 mod legend;
 
 pub use data::{Axis, Series, Track};
+mod grouped_lines;
 mod line_chart;
+mod marker;
 mod plan_view;
 mod side_view;
 mod track_marks;
 
+pub use grouped_lines::{GroupedLine, GroupedLines};
 pub use line_chart::LineChart;
 pub use plan_view::PlanView;
 pub use side_view::SideView;

@@ -10,12 +10,14 @@ use super::spread::Spread;
 use crate::display::style::{series_colour, CHART_WIDTH_PX, INK};
 use crate::display::Render;
 use crate::MimeBundle;
-use plotters::element::{Circle, EmptyElement, PathElement, Polygon};
-use plotters::series::DashedLineSeries;
+use super::fine_path::{draw_line, fill_polygon, Dash, Stroke};
+use plotters::element::{Circle, EmptyElement, PathElement};
 use plotters::style::{Color, RGBColor};
 
 const PLOT_HEIGHT_PX: f64 = 340.0;
 const ELLIPSE_VERTICES: usize = 96;
+/// Dashes of the 95 % ellipses.
+const WIDE_DASH: Dash = Dash::Pattern(6.0, 4.0);
 /// Colours of landing zones, in the order given (outline; the fill is a light tint of it): green,
 /// then purple, so a target and a fairway are told apart in the legend.
 const ZONE_COLOURS: [RGBColor; 2] = [RGBColor(46, 125, 50), RGBColor(123, 31, 162)];
@@ -74,7 +76,7 @@ impl ScatterEllipses {
             self.clouds.iter().enumerate().map(|(i, c)| LegendEntry::new(Swatch::Dot(series_colour(i)), c.label.clone())).collect();
         legend.push(LegendEntry::new(Swatch::Cross(INK), "mean"));
         legend.push(LegendEntry::new(Swatch::Line(INK), "50 % ellipse"));
-        legend.push(LegendEntry::new(Swatch::Dashed(INK), "95 % ellipse"));
+        legend.push(LegendEntry::new(Swatch::Stroke(INK, WIDE_DASH), "95 % ellipse"));
         legend.extend(self.zones.iter().enumerate().map(|(i, z)| LegendEntry::new(Swatch::Block(ZONE_SWATCHES[i % 2]), z.label.clone())));
         let scale = if self.landing_zone { "; equal scales on both axes" } else { "" };
         let frame = Frame::new(&self.title).subtitle(format!("Ellipses from each cloud's mean and covariance{scale}")).legend(legend);
@@ -113,8 +115,8 @@ impl ScatterEllipses {
 /// A zone: light fill and solid outline in `colour` (under the clouds).
 fn draw_zone(plot: &mut Plot, zone: &ZoneShape, colour: RGBColor) -> Drawn {
     for ring in zone.rings.iter().filter(|r| r.len() >= 3) {
-        plot.draw_series(std::iter::once(Polygon::new(ring.clone(), colour.mix(0.12).filled())))?;
-        plot.draw_series(std::iter::once(PathElement::new(ring.clone(), colour.stroke_width(2))))?;
+        fill_polygon(plot, ring, colour, 0.12)?;
+        draw_line(plot, ring, Stroke::solid(colour, 2.0))?;
     }
     Ok(())
 }
@@ -126,8 +128,8 @@ fn draw_cloud(plot: &mut Plot, cloud: &Series, index: usize) -> Drawn {
     let Some(spread) = Spread::of(&cloud.points).filter(|s| s.count >= 3) else {
         return Ok(());
     };
-    plot.draw_series(std::iter::once(PathElement::new(spread.ellipse(0.5, ELLIPSE_VERTICES), colour.stroke_width(2))))?;
-    plot.draw_series(DashedLineSeries::new(spread.ellipse(0.95, ELLIPSE_VERTICES), 6, 4, colour.stroke_width(2)))?;
+    draw_line(plot, &spread.ellipse(0.5, ELLIPSE_VERTICES), Stroke::solid(colour, 2.0))?;
+    draw_line(plot, &spread.ellipse(0.95, ELLIPSE_VERTICES), Stroke::solid(colour, 2.0).dashed(WIDE_DASH))?;
     let cross = |a: (i32, i32), b: (i32, i32)| EmptyElement::at(spread.mean) + PathElement::new(vec![a, b], INK.stroke_width(2));
     plot.draw_series([cross((-7, 0), (7, 0)), cross((0, -7), (0, 7))])?;
     Ok(())

@@ -109,7 +109,7 @@ impl TimeSeries {
             let label = &panel.series[index].label;
             labels.iter().position(|l| l == label).unwrap_or(index)
         };
-        draw_series(&mut plot, &panel.series, slot)
+        draw_series(&mut plot, &panel.series, slot, true)
     }
 }
 

@@ -7,7 +7,7 @@ use crate::help::{FnDoc, Registrar};
 use crate::packages::args::{value_error, Fallible};
 use crate::packages::compare::items_of;
 use crate::packages::{DiscValue, PackageContext};
-use crate::{Axis, Cell, LineChart, Series, Table};
+use crate::{Axis, Cell, GroupedLines, Table};
 use rhai::{Array, NativeCallContext};
 use spinfoil_engine::{flight_signature, CaseDisc, CaseModel, FlightSignature, StudyCase, SIGNATURE_SCALES};
 
@@ -59,18 +59,18 @@ pub(crate) fn signature_value(signatures: &[(String, FlightSignature)]) -> Study
     for (_, _, meaning) in SIGNATURE_SCALES {
         table = table.note(meaning);
     }
-    let mut chart = LineChart::new(
+    let mut chart = GroupedLines::new(
         "Turn and fade against release speed",
         Axis::new("release speed", "m/s"),
         Axis::new("angle, fade side positive", "°"),
     );
-    chart.subtitle = Some("Greatest bank toward the turn side (negative) and the track's hook after the apex; battery: flat right-hand backhand, launch 10°, spin energy 0.2 of the translational, calm air".into());
+    chart.subtitle = Some("Colour and marker: design; solid: greatest bank toward the turn side (negative); dashed: the track's hook after the apex. Battery: flat right-hand backhand, launch 10°, spin energy 0.2 of the translational, calm air".into());
     chart.zero_line = true;
     for (name, sig) in signatures {
         let turn = sig.throws.iter().map(|t| (t.speed_mps, -t.turn_bank_deg)).collect();
-        chart = chart.series(Series::new(format!("{name}: greatest turn bank"), turn));
+        chart = chart.line(name, "greatest turn bank", turn);
         let fade = sig.throws.iter().map(|t| (t.speed_mps, t.fade_hook_deg)).collect();
-        chart = chart.series(Series::new(format!("{name}: fade hook after apex"), fade));
+        chart = chart.line(name, "fade hook after apex", fade);
     }
     StudyValue::new(table.note(crate::SAFETY_CAUTION), &chart)
 }
