@@ -89,7 +89,8 @@ fn every_line_chart_kind_draws_fractional_pixels() {
 /// Two flights, each with landing and rest; the first with a curved ground path.
 fn flights_with_ground_play() -> PlanView {
     let track = |label: &str, shift: f64| Track::new(label, gentle_curve().iter().map(|(x, y)| (*x, y + shift)).collect());
-    let ground: Vec<(f64, f64)> = (0..=10).map(|i| f64::from(i) * 0.5).map(|s| (79.6 + s, 12.67 + shift_arc(s))).collect();
+    // The path starts 0.5 m past the landing point: the chart joins it to the landing dot.
+    let ground: Vec<(f64, f64)> = (1..=10).map(|i| f64::from(i) * 0.5).map(|s| (79.6 + s, 12.67 + shift_arc(s))).collect();
     PlanView::new("Ground play")
         .track(track("P-7 one-piece", 0.0).landing((79.6, 12.67)).rest(*ground.last().expect("ground")).ground(ground))
         .track(track("P-7 rim-heavy", -3.0).landing((79.6, 9.67)).rest((84.0, 11.0)))
@@ -190,4 +191,15 @@ fn grouped_lines_legend_names_each_group_and_measure_once() {
         assert_eq!(texts.iter().filter(|t| *t == wanted).count(), 1, "{wanted:?} once in {texts:?}");
     }
     assert!(!texts.iter().any(|t| t.contains(':')), "no design-measure combinations in the legend: {texts:?}");
+}
+
+#[test]
+fn plan_view_side_labels_sit_at_the_throwers_end_away_from_the_landings() {
+    let text = svg_of(&flights_with_ground_play());
+    let doc = parse(&text);
+    for label in ["▲ LEFT of thrower", "▼ RIGHT of thrower"] {
+        let node = doc.descendants().find(|n| n.has_tag_name("text") && n.text().map(str::trim) == Some(label)).expect(label);
+        let x: f64 = attribute(&node, "x").parse().expect("x");
+        assert!(x < 200.0, "{label} at x = {x} px, not by the landings on the right");
+    }
 }

@@ -85,18 +85,18 @@ impl Track {
         self
     }
 
-    /// The ground play to draw, from first contact to rest (m): the ground path when it has at
-    /// least two finite points, else the straight line from the landing to the rest point when
-    /// both are known and apart; empty when there is none.
+    /// The ground play to draw, from first contact to rest (m): the ground path, joined to the
+    /// landing and rest points when they are known, else the straight line from the landing to
+    /// the rest point; empty when that leaves fewer than two distinct points.
     pub(crate) fn ground_play(&self) -> Vec<(f64, f64)> {
-        let path = finite(&self.ground);
-        if path.len() >= 2 {
-            return path;
+        let (landing, rest) = (self.landing.filter(|p| point_is_finite(*p)), self.rest.filter(|p| point_is_finite(*p)));
+        let mut path: Vec<(f64, f64)> = landing.into_iter().collect();
+        for point in finite(&self.ground).into_iter().chain(rest) {
+            if path.last().is_none_or(|last| (last.0 - point.0).hypot(last.1 - point.1) > 1e-9) {
+                path.push(point);
+            }
         }
-        match (self.landing.filter(|p| point_is_finite(*p)), self.rest.filter(|p| point_is_finite(*p))) {
-            (Some(a), Some(b)) if (a.0 - b.0).hypot(a.1 - b.1) > 1e-6 => vec![a, b],
-            _ => Vec::new(),
-        }
+        if path.len() >= 2 { path } else { Vec::new() }
     }
 
     /// Every finite point of the track, the markers and the ground path included (for axis

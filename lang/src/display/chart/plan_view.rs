@@ -74,13 +74,15 @@ fn plot_height_px(bounds: Bounds) -> f64 {
     natural.clamp(MIN_PLOT_HEIGHT_PX, MAX_PLOT_HEIGHT_PX)
 }
 
-/// "LEFT of thrower" along the top edge and "RIGHT of thrower" along the bottom edge.
+/// "LEFT of thrower" along the top edge and "RIGHT of thrower" along the bottom edge, at the
+/// thrower's end of the plot, where tracks are still near the line (at the far end they would
+/// run through the labels where the discs land).
 fn draw_sides(plot: &mut Plot, bounds: Bounds) -> Drawn {
-    let inset_x = bounds.x1 - 0.01 * bounds.width();
+    let inset_x = bounds.x0 + 0.01 * bounds.width();
     let inset_y = 0.02 * bounds.height();
     let style = font::text(SMALL_PX, MUTED_INK);
-    let top = font::anchored(style.clone(), HPos::Right, VPos::Top);
-    let bottom = font::anchored(style, HPos::Right, VPos::Bottom);
+    let top = font::anchored(style.clone(), HPos::Left, VPos::Top);
+    let bottom = font::anchored(style, HPos::Left, VPos::Bottom);
     plot.draw_series(std::iter::once(Text::new("▲ LEFT of thrower", (inset_x, bounds.y1 - inset_y), top)))?;
     plot.draw_series(std::iter::once(Text::new("▼ RIGHT of thrower", (inset_x, bounds.y0 + inset_y), bottom)))?;
     Ok(())
