@@ -1,4 +1,5 @@
 use super::doc::{FieldDoc, FnDoc};
+use super::language::{language_markdown, language_text};
 
 /// Every documented function and field of the language, in registration order.
 #[derive(Debug, Clone, Default, PartialEq)]
@@ -32,6 +33,9 @@ impl Docs {
 
     /// What `help(topic)` shows: a function's docs, a type's fields, or a hint.
     pub fn help(&self, topic: &str) -> String {
+        if topic == "language" {
+            return language_text();
+        }
         let docs = self.find(topic);
         if !docs.is_empty() {
             return docs.iter().map(|d| d.to_text()).collect::<Vec<_>>().join("\n");
@@ -49,7 +53,9 @@ impl Docs {
 
     /// What `help()` shows: every function by section, with its signature.
     pub fn overview(&self) -> String {
-        let mut text = String::from("Spinfoil functions (help(\"name\") for details):\n");
+        let mut text = String::from(
+            "Spinfoil functions (help(\"name\") for details; help(\"language\") for the syntax and reserved words):\n",
+        );
         for (section, about) in &self.sections {
             text.push_str(&format!("\n{section}: {about}\n"));
             for doc in self.functions.iter().filter(|d| &d.section == section) {
@@ -64,8 +70,9 @@ impl Docs {
         let mut md = String::from(
             "# Spinfoil language reference\n\n\
              Generated from the doc strings of the functions (`cargo run -p spinfoil-lang --example reference`).\n\
-             Do not edit by hand. Options are object maps whose keys carry their unit.\n",
+             Do not edit by hand. Options are object maps whose keys carry their unit.\n\n",
         );
+        md.push_str(&language_markdown());
         for (section, about) in &self.sections {
             md.push_str(&format!("\n## {section}\n\n{about}\n\n"));
             for doc in self.functions.iter().filter(|d| &d.section == section) {

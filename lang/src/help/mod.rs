@@ -2,10 +2,12 @@
 //! inspection, and written to the reference page.
 mod doc;
 mod docs;
+mod language;
 mod registrar;
 
 pub use doc::{FieldDoc, FnDoc};
 pub use docs::Docs;
+pub(crate) use language::reserved_word_hint;
 pub(crate) use registrar::Registrar;
 
 use std::sync::Arc;
@@ -16,7 +18,7 @@ pub(crate) fn register_help(reg: &mut Registrar, docs_cell: Arc<std::sync::OnceL
     reg.doc(FnDoc::new("help() -> string", "Lists every function by package, with its signature.", "help()"));
     reg.doc(FnDoc::new(
         "help(name: string) -> string",
-        "The documentation of a function (signature, units, options, an example) or the fields of a type such as \"Flight\".",
+        "The documentation of a function (signature, units, options, an example), the fields of a type such as \"Flight\", or, with \"language\", the syntax in brief and the reserved words (such as throw) that cannot name a variable.",
         "help(\"fly\")",
     ));
     let cell = docs_cell.clone();

@@ -1,6 +1,6 @@
 use super::SessionSettings;
 use crate::errors::{closest, split_kind};
-use crate::help::Docs;
+use crate::help::{reserved_word_hint, Docs};
 use rhai::{EvalAltResult, ParseError, Position};
 
 /// An error from a cell, with its script position when there is one.
@@ -31,8 +31,9 @@ impl CellError {
         Self { kind: kind.to_string(), message, line: pos.line(), column: pos.position() }
     }
 
-    /// A syntax error from compiling a cell.
-    pub(crate) fn from_parse(err: &ParseError, settings: &SessionSettings) -> Self {
+    /// A syntax error from compiling the cell `code`; when the error stands at a reserved word
+    /// (`for throw in throws`), the message says so and how to name the variable instead.
+    pub(crate) fn from_parse(err: &ParseError, code: &str, settings: &SessionSettings) -> Self {
         if matches!(err.err_type(), rhai::ParseErrorType::ExprTooDeep) {
             let message = format!(
                 "expressions nested deeper than {} levels ({} inside functions; limits max_expression_depth, max_function_expression_depth)",
@@ -40,7 +41,15 @@ impl CellError {
             );
             return Self::at("LimitError", message, err.position());
         }
-        Self::at("SyntaxError", err.err_type().to_string(), err.position())
+        let mut message = err.err_type().to_string();
+        if let Some(hint) = reserved_word_at(code, err.position()) {
+            // Rhai's own "'x' is a reserved keyword" says less than the hint: replace it.
+            message = match err.err_type() {
+                rhai::ParseErrorType::Reserved(_) => hint,
+                _ => format!("{message}: {hint}"),
+            };
+        }
+        Self::at("SyntaxError", message, err.position())
     }
 
     /// A runtime error, reported at its position in the cell being run: for errors inside
@@ -61,6 +70,24 @@ impl CellError {
         }
         Self::at(&kind, message, pos)
     }
+}
+
+/// The reserved-word hint for the word that starts at `pos` in `code`, if it is one; a word
+/// right after a `.` or inside `#{ }` stands where a key was expected.
+fn reserved_word_at(code: &str, pos: Position) -> Option<String> {
+    let (line, column) = (pos.line()?, pos.position()?);
+    let text = code.lines().nth(line.checked_sub(1)?)?;
+    let start = text.char_indices().nth(column.checked_sub(1)?).map(|(i, _)| i)?;
+    let rest = &text[start..];
+    let end = rest.find(|c: char| !(c.is_alphanumeric() || c == '_')).unwrap_or(rest.len());
+    let before = text[..start].trim_end();
+    let as_key = before.ends_with('.') || before.ends_with("#{") || (before.ends_with(',') && inside_map(before));
+    reserved_word_hint(&rest[..end], as_key)
+}
+
+/// True when `before` (the line up to a word) has an object map `#{` still open.
+fn inside_map(before: &str) -> bool {
+    before.rfind("#{").is_some_and(|open| !before[open..].contains('}'))
 }
 
 fn plain_message(err: &EvalAltResult) -> String {

@@ -57,7 +57,7 @@ impl Session {
     }
 
     fn run(&mut self, code: &str) -> Result<Option<MimeBundle>, CellError> {
-        let ast = self.engine.compile(code).map_err(|e| CellError::from_parse(&e, &self.settings))?;
+        let ast = self.engine.compile(code).map_err(|e| CellError::from_parse(&e, code, &self.settings))?;
         let merged = self.functions.merge(&ast);
         self.functions = self.functions.merge(&ast.clone_functions_only());
         let value: Dynamic = self

@@ -38,6 +38,7 @@ fn no_folder(s: &mut SessionSettings) {
 const ROWS: &[(&str, &str, Tweak)] = &[
     ("scripts", "let x = (1 + 2;", same),
     ("scripts", "let s = \"open;", same),
+    ("scripts", "for throw in [t] { fly(d, throw) }", same),
     ("scripts", "fyl(d, t)", same),
     ("scripts", "fly(1, 2, 3)", same),
     ("scripts", "carry + 1", same),

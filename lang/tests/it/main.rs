@@ -3,6 +3,7 @@ mod bad_input_page;
 mod bad_scripts;
 mod chart_lines;
 mod display;
+mod language;
 mod limits;
 mod packages;
 mod session;
