@@ -30,8 +30,6 @@ pub(crate) enum Swatch {
     Square(RGBColor),
     /// The thrower's triangle, pointing right, as drawn at the release point.
     Thrower(RGBColor),
-    /// A dashed line (a second kind of outline).
-    Dashed(RGBColor),
     /// A plus-shaped cross (a mean).
     Cross(RGBColor),
     /// A line in a dash pattern (a kind of line, keyed apart from the series' colours).
@@ -56,10 +54,11 @@ impl LegendEntry {
     }
 }
 
-/// The swatch of series number `index`: solid in the first round of the palette, dashed after.
+/// The swatch of series number `index`: solid in the first round of the palette, dashed after
+/// (in the dashes the lines are drawn with).
 pub(crate) fn series_swatch(index: usize) -> Swatch {
     let colour = series_colour(index);
-    if is_dashed(index) { Swatch::Dashed(colour) } else { Swatch::Line(colour) }
+    if is_dashed(index) { Swatch::Stroke(colour, Dash::DASHED) } else { Swatch::Line(colour) }
 }
 
 /// Series past the palette's length repeat its colours as dashed lines.
@@ -109,11 +108,6 @@ fn draw_swatch(area: &Area, swatch: Swatch, (x, y): (i32, i32)) -> Drawn {
         Swatch::Thrower(c) => {
             let corners: Vec<(i32, i32)> = THROWER_TRIANGLE.iter().map(|(dx, dy)| (centre.0 - 2 + dx, y + dy)).collect();
             area.draw(&Polygon::new(corners, c.filled()))?
-        }
-        Swatch::Dashed(c) => {
-            for start in [0, 8, 16] {
-                area.draw(&PathElement::new(vec![(x + start, y), (x + start + 4, y)], c.stroke_width(2)))?;
-            }
         }
         Swatch::Cross(c) => {
             area.draw(&PathElement::new(vec![(centre.0 - 6, y), (centre.0 + 6, y)], c.stroke_width(2)))?;

@@ -71,7 +71,9 @@ impl TimeSeries {
     fn frame(&self) -> Frame {
         let legend = self.labels().into_iter().enumerate();
         let entries = legend.map(|(index, label)| LegendEntry::new(series_swatch(index), label));
-        Frame::new(&self.title).subtitle("One panel per quantity, all on the same time axis").legend(entries.collect())
+        let frame = Frame::new(&self.title).legend(entries.collect());
+        // A single panel needs no word on how the panels are laid out.
+        if self.panels.len() > 1 { frame.subtitle("One panel per quantity, all on the same time axis") } else { frame }
     }
 
     /// The chart as SVG.

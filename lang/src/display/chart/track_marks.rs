@@ -69,7 +69,7 @@ pub(crate) fn track_legend(tracks: &[Track], thrower: bool) -> Vec<LegendEntry> 
         entries.push(LegendEntry::new(Swatch::Dot(MARK_KEY), "first ground contact"));
     }
     if tracks.iter().any(|t| t.ground_play().len() >= 2) {
-        entries.push(LegendEntry::new(Swatch::Dashed(MARK_KEY), "ground play (contact to rest)"));
+        entries.push(LegendEntry::new(Swatch::Stroke(MARK_KEY, GROUND_DASH), "ground play (contact to rest)"));
     }
     if tracks.iter().any(|t| t.rest.is_some()) {
         entries.push(LegendEntry::new(Swatch::Square(MARK_KEY), "at rest"));
