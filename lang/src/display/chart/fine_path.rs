@@ -14,10 +14,18 @@ use super::data::point_is_finite;
 use super::frame::Drawn;
 use plotters::element::Text;
 use plotters::style::{IntoFont, RGBColor};
+use std::collections::hash_map::RandomState;
 use std::fmt::Write;
+use std::hash::{BuildHasher, Hasher};
+use std::sync::OnceLock;
 
-/// Starts the content of a text element that carries a shape.
-const MARK: &str = "spinfoil-fine-shape:";
+/// Starts the content of a text element that carries a shape: a fixed word and a number drawn
+/// at random once per process, so no text of a chart (a label read from a file, say) can pass
+/// for a shape and smuggle markup into the SVG. The mark never reaches the finished chart.
+fn mark() -> &'static str {
+    static MARK: OnceLock<String> = OnceLock::new();
+    MARK.get_or_init(|| format!("spinfoil-fine-shape-{:016x}:", RandomState::new().build_hasher().finish()))
+}
 /// Stand-ins for the characters the backend escapes in text (`<`, `>`, `"`), from Unicode's
 /// private-use area, so they never occur in chart text.
 const CONCEALED: [(char, char); 3] = [('<', '\u{E000}'), ('>', '\u{E001}'), ('"', '\u{E002}')];
@@ -132,7 +140,7 @@ fn pass_through(plot: &mut Plot, element: &str) -> Drawn {
     let clipped = format!("<svg x=\"{x}\" y=\"{y}\" width=\"{width}\" height=\"{height}\" viewBox=\"{x} {y} {width} {height}\" overflow=\"hidden\">{element}</svg>");
     let anchor = (plot.x_range().start, plot.y_range().start);
     let style = ("sans-serif", 10.0).into_font();
-    plot.draw_series(std::iter::once(Text::new(format!("{MARK}{}", conceal(&clipped)), anchor, style)))?;
+    plot.draw_series(std::iter::once(Text::new(format!("{}{}", mark(), conceal(&clipped)), anchor, style)))?;
     Ok(())
 }
 
@@ -148,13 +156,14 @@ fn reveal(text: &str) -> String {
 pub(crate) fn expand(svg: String) -> String {
     let mut out = String::with_capacity(svg.len());
     let mut rest = svg.as_str();
-    while let Some(mark) = rest.find(MARK) {
-        let (Some(open), Some(close)) = (rest[..mark].rfind("<text"), rest[mark..].find("</text>")) else {
+    let marker = mark();
+    while let Some(at) = rest.find(marker) {
+        let (Some(open), Some(close)) = (rest[..at].rfind("<text"), rest[at..].find("</text>")) else {
             break;
         };
         out.push_str(&rest[..open]);
-        out.push_str(&reveal(rest[mark + MARK.len()..mark + close].trim_end()));
-        rest = &rest[mark + close + "</text>".len()..];
+        out.push_str(&reveal(rest[at + marker.len()..at + close].trim_end()));
+        rest = &rest[at + close + "</text>".len()..];
     }
     out.push_str(rest);
     out
@@ -167,7 +176,7 @@ mod tests {
     #[test]
     fn expand_swaps_a_marked_text_for_its_element_and_keeps_the_rest() {
         let element = "<polyline points=\"1.25,2.50 3,4\"/>";
-        let svg = format!("<svg>\n<rect/>\n<text x=\"1\" y=\"2\">\n{MARK}{}\n</text>\n<circle/>\n</svg>", conceal(element));
+        let svg = format!("<svg>\n<rect/>\n<text x=\"1\" y=\"2\">\n{}{}\n</text>\n<circle/>\n</svg>", mark(), conceal(element));
         assert_eq!(expand(svg), format!("<svg>\n<rect/>\n{element}\n<circle/>\n</svg>"));
     }
 
@@ -175,6 +184,12 @@ mod tests {
     fn plain_text_passes_unchanged() {
         let svg = "<svg><text>speed (m/s)</text></svg>".to_string();
         assert_eq!(expand(svg.clone()), svg);
+    }
+
+    #[test]
+    fn text_that_only_looks_like_a_shape_stays_text() {
+        let forged = format!("<svg><text>spinfoil-fine-shape:{}</text></svg>", conceal("<script/>"));
+        assert_eq!(expand(forged.clone()), forged);
     }
 
     #[test]
