@@ -14,7 +14,7 @@ use std::sync::Arc;
 /// A flight as scripts hold it: the engine's flight and what it was flown with.
 #[derive(Debug, Clone)]
 pub(crate) struct FlightValue {
-    /// The disc's name (the flight's label in tables and charts).
+    /// The flight's label in tables and charts: the disc's name unless the script set another.
     pub label: String,
     /// The release state the throw gave this disc.
     pub release: ReleaseState,
@@ -163,7 +163,7 @@ fn register_metric_fields(reg: &mut Registrar) {
         let get = *get;
         reg.getter("Flight", field, doc, move |f: &mut FlightValue| get(f));
     }
-    reg.getter("Flight", "name", "the disc's name", |f: &mut FlightValue| f.label.clone());
+    super::flight_name::register(reg);
     reg.getter(
         "Flight",
         "wobble_half_time_s",

@@ -5,6 +5,7 @@ mod charts;
 mod compare;
 mod discs;
 mod environments;
+mod flight_name;
 mod flights;
 mod layups;
 mod materials;

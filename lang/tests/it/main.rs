@@ -5,6 +5,7 @@ mod chart_lines;
 mod display;
 mod language;
 mod limits;
+mod naming;
 mod packages;
 mod session;
 mod sandbox;
