@@ -203,3 +203,19 @@ fn plan_view_side_labels_sit_at_the_throwers_end_away_from_the_landings() {
         assert!(x < 200.0, "{label} at x = {x} px, not by the landings on the right");
     }
 }
+
+#[test]
+fn grouped_lines_legend_gives_measures_a_row_of_their_own_when_it_wraps() {
+    let mut chart = GroupedLines::new("Turn and fade", Axis::new("release speed", "m/s"), Axis::new("angle", "°"));
+    for design in ["Kestrel one-piece", "Kestrel overmold", "Heron midrange"] {
+        chart = chart.line(design, "greatest turn bank", vec![(16.0, -1.0), (28.0, -9.0)]).line(design, "fade hook after apex", vec![(16.0, 30.0), (28.0, 50.0)]);
+    }
+    let text = svg_of(&chart);
+    let doc = parse(&text);
+    let y_of = |label: &str| {
+        let node = doc.descendants().find(|n| n.has_tag_name("text") && n.text().map(str::trim) == Some(label)).expect(label);
+        attribute(&node, "y").parse::<f64>().expect("y")
+    };
+    assert!(y_of("greatest turn bank") > y_of("Heron midrange"), "measures start a new row");
+    assert_eq!(y_of("greatest turn bank"), y_of("fade hook after apex"), "measures share their row");
+}

@@ -8,7 +8,7 @@ use super::bounds::Bounds;
 use super::data::{finite, Axis, Series};
 use super::fine_path::{draw_line, Dash, Stroke};
 use super::frame::{Drawn, Frame};
-use super::legend::{LegendEntry, Swatch};
+use super::legend::{self, LegendEntry, Swatch};
 use super::line_chart::{draw_zero_line, layered_width_px, series_summary};
 use super::marker::{draw_marker, Marker};
 use crate::display::style::{series_colour, MUTED_INK, PLOT_BACKGROUND};
@@ -71,7 +71,13 @@ impl GroupedLines {
     fn legend(&self) -> Vec<LegendEntry> {
         let groups = self.groups.iter().enumerate().map(|(g, name)| LegendEntry::new(Swatch::Marked(series_colour(g), Marker::of(g)), name.clone()));
         let measures = self.measures.iter().enumerate().map(|(m, name)| LegendEntry::new(Swatch::Stroke(MUTED_INK, dash_of(m)), name.clone()));
-        groups.chain(measures).collect()
+        let mut entries: Vec<LegendEntry> = groups.chain(measures).collect();
+        // When the legend takes more than one row anyway, the measures get rows of their own.
+        let first_measure = self.groups.len();
+        if legend::height(&entries) > legend::ROW_PX && first_measure > 0 && first_measure < entries.len() {
+            entries[first_measure] = entries[first_measure].clone().on_new_row();
+        }
+        entries
     }
 
     fn frame(&self) -> Frame {

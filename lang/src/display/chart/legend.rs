@@ -45,12 +45,19 @@ pub(crate) struct LegendEntry {
     pub swatch: Swatch,
     /// Its label.
     pub label: String,
+    /// Starts a new row (e.g. the first of a second kind of entry).
+    pub new_row: bool,
 }
 
 impl LegendEntry {
     /// An entry.
     pub fn new(swatch: Swatch, label: impl Into<String>) -> Self {
-        Self { swatch, label: label.into() }
+        Self { swatch, label: label.into(), new_row: false }
+    }
+
+    /// The same entry at the start of a new row.
+    pub fn on_new_row(self) -> Self {
+        Self { new_row: true, ..self }
     }
 }
 
@@ -73,7 +80,7 @@ fn layout(entries: &[LegendEntry]) -> Vec<(i32, i32)> {
     let mut places = Vec::with_capacity(entries.len());
     for entry in entries {
         let width = SWATCH_PX + 6 + text_width_px(&entry.label, TEXT_PX) as i32;
-        if x > LEFT_PX && x + width > right_edge {
+        if x > LEFT_PX && (entry.new_row || x + width > right_edge) {
             (x, y) = (LEFT_PX, y + ROW_PX);
         }
         places.push((x, y));
