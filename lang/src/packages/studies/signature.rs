@@ -64,7 +64,7 @@ pub(crate) fn signature_value(signatures: &[(String, FlightSignature)]) -> Study
         Axis::new("release speed", "m/s"),
         Axis::new("angle, fade side positive", "°"),
     );
-    chart.subtitle = Some("Colour and marker: design; solid: greatest bank toward the turn side (negative); dashed: the track's hook after the apex. Battery: flat right-hand backhand, launch 10°, spin energy 0.2 of the translational, calm air".into());
+    chart.subtitle = Some("Colour and marker: design; turn bank below zero, the hook after the apex above. Battery: flat right-hand backhand, launch 10°, spin energy 0.2 of the translational, calm air".into());
     chart.zero_line = true;
     for (name, sig) in signatures {
         let turn = sig.throws.iter().map(|t| (t.speed_mps, -t.turn_bank_deg)).collect();
