@@ -1,6 +1,7 @@
 //! Saving and loading designs and exports, confined to the study's folder.
 mod confine;
 mod design_file;
+mod json_value;
 mod package;
 
 pub use confine::{FileAccessError, StudyFolder};

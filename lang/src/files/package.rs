@@ -1,12 +1,13 @@
 //! The script functions that save and load designs and exports.
 use super::confine::{read_text, write_atomic, StudyFolder};
 use super::design_file::{DesignFile, Format};
+use super::json_value::json_to_dynamic;
 use crate::errors::script_error;
 use crate::help::{FnDoc, Registrar};
 use crate::packages::{DiscValue, EnvironmentValue, FlightValue, ThrowValue};
-use crate::session::ScriptRules;
+use crate::session::{limit_error, ScriptRules};
 use crate::Table;
-use rhai::{EvalAltResult, NativeCallContext};
+use rhai::{Dynamic, EvalAltResult, NativeCallContext};
 
 type Fallible<T> = Result<T, Box<EvalAltResult>>;
 
@@ -20,7 +21,7 @@ fn file_error(ctx: &NativeCallContext, err: impl std::fmt::Display) -> Box<EvalA
 /// Registers the save and load functions. They use the folders of the session's
 /// [`ScriptRules`] and fail with a `FileError` when the session has none.
 pub(crate) fn register(reg: &mut Registrar) {
-    reg.section("files", "saving and loading designs (JSON or TOML) and exports, inside the study's folder only");
+    reg.section("files", "saving and loading designs (JSON or TOML), exports and JSON data, inside the study's folder only");
     register_save(reg);
     register_load(reg);
     reg.engine.register_fn("save_text", |ctx: NativeCallContext, text: &str, path: &str| save_text(&ctx, text, path));
@@ -95,6 +96,31 @@ fn register_load(reg: &mut Registrar) {
         "Loads an environment saved with save from the study folder.",
         "let day = load_environment(\"days/windy.toml\");",
     ));
+    reg.engine.register_fn("load_json", |ctx: NativeCallContext, path: &str| load_json(&ctx, path));
+    reg.doc(FnDoc::new(
+        "load_json(path: string) -> map, array or value",
+        "Reads any JSON file (.json) from the study folder (or an extra read-only folder) as script values: objects become object maps, arrays arrays, whole numbers integers, other numbers floats, null (). The same confinement and size limits as the other loaders apply; a malformed file is refused with the line and column of the problem.",
+        "let field = load_json(\"fields/north-meadow.json\");\nlet tee = field.tee_m;",
+    ));
+}
+
+fn load_json(ctx: &NativeCallContext, path: &str) -> Fallible<Dynamic> {
+    let text = read_confined(ctx, path, &["json"])?;
+    let value = json_to_dynamic(&text).map_err(|e| file_error(ctx, format!("\"{path}\" is not valid JSON: {e}")))?;
+    ctx.engine().ensure_data_size_within_limits(&value).map_err(|_| {
+        let engine = ctx.engine();
+        limit_error(
+            ctx,
+            format!(
+                "{}: \"{path}\" holds more than a script value may: arrays hold at most {} elements, maps {} entries, strings {} bytes (limits max_array_size, max_map_size, max_string_size)",
+                ctx.fn_name(),
+                engine.max_array_size(),
+                engine.max_map_size(),
+                engine.max_string_size()
+            ),
+        )
+    })?;
+    Ok(value)
 }
 
 fn unreachable_kind<T>(ctx: &NativeCallContext) -> Fallible<T> {
@@ -127,6 +153,17 @@ fn load(ctx: &NativeCallContext, path: &str, kind: &str) -> Fallible<DesignFile>
 /// otherwise.
 pub(crate) fn read_confined(ctx: &NativeCallContext, path: &str, extensions: &[&str]) -> Fallible<String> {
     let full = folder(ctx)?.for_reading(path, extensions).map_err(|e| file_error(ctx, e))?;
+    let max = ctx.engine().max_string_size();
+    let bytes = std::fs::metadata(&full).map(|m| m.len()).unwrap_or(0);
+    if max > 0 && bytes > max as u64 {
+        return Err(limit_error(
+            ctx,
+            format!(
+                "{}: \"{path}\" is {bytes} bytes, more than the {max} bytes a script may read (limit max_string_size)",
+                ctx.fn_name()
+            ),
+        ));
+    }
     read_text(&full, path).map_err(|e| file_error(ctx, e))
 }
 

@@ -15,7 +15,7 @@ pub use completion::Completions;
 pub use error::CellError;
 pub use interrupt::InterruptHandle;
 pub use settings::SessionSettings;
-pub(crate) use limits::{check_study_flights, check_trajectory_samples, ScriptRules};
+pub(crate) use limits::{check_study_flights, check_trajectory_samples, limit_error, ScriptRules};
 pub(crate) use sink_slot::SinkSlot;
 
 use crate::help::Docs;

@@ -79,6 +79,8 @@ const ROWS: &[(&str, &str, Tweak)] = &[
     ("files", "load_disc(\"broken.toml\")", same),
     ("files", "load_disc(\"throw.json\")", same),
     ("files", "load_disc(\"impossible.json\")", same),
+    ("files", "load_json(\"field.json\")", same),
+    ("files", "load_json(\"big_list.json\")", small_data),
     ("files", "load_measured(\"bad_number.csv\")", same),
     ("files", "load_measured(\"missing_column.csv\")", same),
     ("files", "measured_from_csv(\"flight,speed_mps\\nA,22\")", same),
@@ -97,6 +99,8 @@ fn prepared_folder() -> (PathBuf, PathBuf) {
     write("broken.json", "{ \"kind\": \"disc\", \"design\": ");
     write("broken.toml", "kind = \"disc\"\ndesign = [\n");
     write("throw.json", "");
+    write("field.json", "{\n  \"name\": \"North meadow\",\n  \"tee_m\": [0, 0]\n  \"holes\": []\n}\n");
+    write("big_list.json", &format!("[{}]", vec!["0.5"; 5000].join(", ")));
     write("bad_number.csv", "flight,speed_mps,spin_rps,launch_deg,nose_deg,hyzer_deg,t_s,x_m,y_m,z_m\nA,22,15,10,0,0,3.9,71.2,-2.1,\nB,fast,15,10,0,0,3.9,70.0,-1.0,\n");
     write("missing_column.csv", "flight,speed_mps,spin_rps,t_s,x_m,y_m,z_m\nA,22,15,3.9,71.2,-2.1,\n");
     std::fs::write(outside.join("secret.json"), "{}").unwrap();

@@ -3,6 +3,7 @@ mod bad_input_page;
 mod bad_scripts;
 mod chart_lines;
 mod display;
+mod json_files;
 mod language;
 mod limits;
 mod naming;
