@@ -91,7 +91,9 @@ fn track_points(f: &FlightValue, pick: fn(&nalgebra::Vector3<f64>) -> (f64, f64)
     let points = f.flight.samples.iter().map(|s| pick(&s.position_m)).collect();
     let track = Track::new(f.label.clone(), points).landing(pick(&f.flight.metrics.landing_position_m));
     match &f.ground {
-        Some(ground) => track.rest(pick(&ground.rest_position_m)),
+        Some(ground) => track
+            .rest(pick(&ground.rest_position_m))
+            .ground(ground.samples.iter().map(|s| pick(&s.position_m)).collect()),
         None => track,
     }
 }
