@@ -57,12 +57,15 @@ pub(crate) fn edit_distance(a: &str, b: &str) -> usize {
 }
 
 /// The candidate closest to `name`, when it is close enough to be a likely typo (or shares the
-/// name's stem before its unit suffix, e.g. `diameter_mm` → `diameter_cm`).
+/// name's stem before its unit suffix, e.g. `diameter_mm` → `diameter_cm`, or is the name with a
+/// unit added, e.g. `speed` → `speed_mps`).
 pub(crate) fn closest<'a>(name: &str, candidates: impl IntoIterator<Item = &'a str>) -> Option<&'a str> {
     let stem = |s: &str| s.rsplit_once('_').map_or(s.to_string(), |(head, _)| head.to_string());
     let related = |c: &str| {
         let (a, b) = (stem(name), stem(c));
-        name.contains('_') && (a == b || (a.len() >= 3 && b.starts_with(&a)) || (b.len() >= 3 && a.starts_with(&b)))
+        let unit_added = name.len() >= 3 && b == name;
+        unit_added
+            || name.contains('_') && (a == b || (a.len() >= 3 && b.starts_with(&a)) || (b.len() >= 3 && a.starts_with(&b)))
     };
     candidates
         .into_iter()
@@ -89,6 +92,14 @@ mod tests {
         assert_eq!(closest("sped_mps", ["speed_mps", "spin_rpm"]), Some("speed_mps"));
         assert_eq!(closest("xyzzy", ["speed_mps", "spin_rpm"]), None);
         assert_eq!(closest("temp_c", ["altitude_m", "temperature_c", "humidity_pct"]), Some("temperature_c"));
+    }
+
+    #[test]
+    fn closest_finds_the_key_with_its_unit_added() {
+        assert_eq!(closest("speed", ["spin_rpm", "speed_mps", "speed_kmh"]), Some("speed_mps"));
+        assert_eq!(closest("spin", ["speed_mps", "spin_rpm"]), Some("spin_rpm"));
+        assert_eq!(closest("split_radius", ["split_radius_cm"]), Some("split_radius_cm"));
+        assert_eq!(closest("rim", ["rim_width_cm", "rim_depth_cm"]), None);
     }
 
     #[test]

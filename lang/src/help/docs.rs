@@ -31,7 +31,8 @@ impl Docs {
         names
     }
 
-    /// What `help(topic)` shows: a function's docs, a type's fields, or a hint.
+    /// What `help(topic)` shows: a function's docs, a type's fields, the meaning of a field
+    /// (`help("carry_m")`), or a hint.
     pub fn help(&self, topic: &str) -> String {
         if topic == "language" {
             return language_text();
@@ -44,6 +45,15 @@ impl Docs {
         if !fields.is_empty() {
             let lines: Vec<String> = fields.iter().map(|f| format!("  .{}: {}", f.field, f.summary)).collect();
             return format!("{topic} fields:\n{}\n", lines.join("\n"));
+        }
+        let owners: Vec<String> = self
+            .fields
+            .iter()
+            .filter(|f| f.field == topic)
+            .map(|f| format!(".{} of {}: {}\n", f.field, f.type_name, f.summary))
+            .collect();
+        if !owners.is_empty() {
+            return format!("{}(help(\"TYPE\") lists every field of a type.)\n", owners.join(""));
         }
         match crate::errors::closest(topic, self.names()) {
             Some(near) => format!("No help for '{topic}'. Did you mean '{near}'? help() lists every function.\n"),

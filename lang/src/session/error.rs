@@ -139,10 +139,24 @@ fn unknown_function(signature: &str, known_fns: &[&str]) -> String {
     let mut message = format!("no function {signature}");
     if known_fns.contains(&name) {
         message.push_str(&format!("; '{name}' exists but takes other arguments: see help(\"{name}\")"));
+    } else if let Some(hint) = functions_naming(name, known_fns) {
+        message.push_str(&hint);
     } else if let Some(near) = closest(name, known_fns.iter().copied()) {
         message.push_str(&format!("; did you mean '{near}'?"));
     }
     message
+}
+
+/// "; did you mean 'a' or 'b'?" for functions whose name has `name` as one of its words
+/// (`release` → `release_for`, `throw_release`); `None` when there are none.
+fn functions_naming(name: &str, known_fns: &[&str]) -> Option<String> {
+    let named: Vec<String> =
+        known_fns.iter().filter(|f| name.len() >= 3 && f.split('_').any(|w| w == name)).map(|f| format!("'{f}'")).collect();
+    match named.as_slice() {
+        [] => None,
+        [one] => Some(format!("; did you mean {one}?")),
+        [first @ .., last] => Some(format!("; did you mean {} or {last}?", first.join(", "))),
+    }
 }
 
 /// "Unknown property 'x' - a getter is not registered for type 'T'" restated with the type's
@@ -154,6 +168,18 @@ fn unknown_field(text: &str, docs: &Docs) -> String {
     if fields.is_empty() {
         return format!("{type_name} has no field '{field}'");
     }
-    let hint = closest(field, fields.iter().copied()).map_or(String::new(), |near| format!("; did you mean '{near}'?"));
+    let hint = match closest(field, fields.iter().copied()) {
+        Some(near) => format!("; did you mean '{near}'?"),
+        None => field_by_symbol(field, &docs.fields_of(type_name)).map_or(String::new(), |f| {
+            format!("; {field} is the field '{f}'")
+        }),
+    };
     format!("{type_name} has no field '{field}'{hint} (fields: {})", fields.join(", "))
+}
+
+/// The first field whose summary names `symbol` as a whole word (`I_z` → `spin_inertia_g_cm2`,
+/// whose summary reads "... about the spin axis I_z, g·cm²").
+fn field_by_symbol<'a>(symbol: &str, fields: &[&'a crate::help::FieldDoc]) -> Option<&'a str> {
+    let is_word = |summary: &str| summary.split(|c: char| !(c.is_alphanumeric() || c == '_')).any(|w| w == symbol);
+    fields.iter().find(|f| is_word(&f.summary)).map(|f| f.field.as_str())
 }

@@ -199,6 +199,8 @@ fn help_works_in_language() {
     assert!(value(&mut s, "help()").contains("help(name: string)"));
     assert!(value(&mut s, "help(\"show\")").contains("Example:"));
     assert!(value(&mut s, "help(\"shwo\")").contains("Did you mean 'show'"));
+    let field = value(&mut s, "help(\"carry_m\")");
+    assert!(field.starts_with(".carry_m of Flight: horizontal distance from release to landing, m"), "{field}");
 }
 
 #[test]
