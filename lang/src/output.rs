@@ -27,7 +27,22 @@ impl MimeBundle {
     pub fn text_plain(&self) -> Option<&str> {
         self.data.get("text/plain").map(String::as_str)
     }
+
+    /// The chart SVG a display carries inside its HTML (a study shows its table and chart as one
+    /// display, the chart after the table in `<div class="spinfoil-chart">`), so that sinks which
+    /// save charts as files (a terminal) save it too; `None` when there is none.
+    pub fn inline_chart_svg(&self) -> Option<&str> {
+        let html = self.data.get("text/html")?;
+        let start = html.find(INLINE_CHART_OPEN)? + INLINE_CHART_OPEN.len();
+        let svg = html[start..].strip_suffix(INLINE_CHART_CLOSE)?;
+        svg.trim_start().starts_with("<svg").then_some(svg)
+    }
 }
+
+/// Opens the chart of a study's HTML display (see [`MimeBundle::inline_chart_svg`]).
+pub(crate) const INLINE_CHART_OPEN: &str = "<div class=\"spinfoil-chart\">";
+/// Closes it; the chart is the last element of the HTML.
+pub(crate) const INLINE_CHART_CLOSE: &str = "</div>";
 
 /// Where a running cell sends what it produces, as it produces it (a terminal, a Jupyter iopub
 /// socket, a notebook writer). Methods take `&self` so a sink can be shared with Rhai callbacks.
@@ -84,5 +99,20 @@ impl OutputSink for CollectedOutput {
     }
     fn update_display(&self, bundle: &MimeBundle, display_id: &str) {
         self.lock().push(OutputEvent::Update(bundle.clone(), display_id.to_string()));
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn the_inline_chart_is_the_svg_after_the_table() {
+        let html = format!("<table></table>\n{INLINE_CHART_OPEN}<svg width=\"1\"></svg>{INLINE_CHART_CLOSE}");
+        let study = MimeBundle::plain("t").with("text/html", html);
+        assert_eq!(study.inline_chart_svg(), Some("<svg width=\"1\"></svg>"));
+        let empty = MimeBundle::plain("t").with("text/html", format!("<p>x</p>{INLINE_CHART_OPEN}{INLINE_CHART_CLOSE}"));
+        assert_eq!(empty.inline_chart_svg(), None);
+        assert_eq!(MimeBundle::plain("t").with("text/html", "<table></table>").inline_chart_svg(), None);
     }
 }

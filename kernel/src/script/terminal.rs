@@ -119,6 +119,12 @@ impl OutputSink for TerminalSink {
         }
         println!("{plain}");
         self.export_table(bundle, number);
+        // A study's display: its table above, its chart inside the HTML.
+        if let Some(svg) = bundle.inline_chart_svg() {
+            if let Some(path) = self.write_file(format!("chart-{number:03}.svg"), svg) {
+                println!("(chart saved to {})", path.display());
+            }
+        }
     }
 
     fn update_display(&self, bundle: &MimeBundle, display_id: &str) {

@@ -33,6 +33,25 @@ fn a_script_prints_tables_and_saves_csv_copies() {
 }
 
 #[test]
+fn a_study_shown_in_a_script_saves_its_chart_beside_its_table() {
+    let folder = scratch("study-chart");
+    let script = r#"
+let d = disc("Heron", midrange_outline(#{}), single_layup(material("Lantern blend", 0.96)), #{ mass_g: 176 });
+let t = throw_release(#{ speed_mps: 20, spin_rpm: 850, launch_deg: 9 });
+show(sweep(d, t, environment(), #{ input: "throw.speed_mps", from: 16, to: 24, count: 3 }));
+"#;
+    std::fs::write(folder.join("sweep.rhai"), script).unwrap();
+    let out = folder.join("out");
+    let output = spinfoil(&["run", folder.join("sweep.rhai").to_str().unwrap(), "--out", out.to_str().unwrap(), "--tables", "csv"], "");
+    let (stdout, stderr) = text(&output);
+    assert_eq!(output.status.code(), Some(0), "{stderr}");
+    let chart = std::fs::read_to_string(out.join("chart-001.svg")).expect("the sweep's chart is saved");
+    assert!(chart.starts_with("<svg") && chart.trim_end().ends_with("</svg>"), "{chart}");
+    assert!(out.join("table-001.csv").exists(), "the sweep's table is still exported");
+    assert!(stdout.contains("(chart saved to "), "{stdout}");
+}
+
+#[test]
 fn a_failing_script_exits_with_1_and_shows_the_position() {
     let folder = scratch("fail");
     std::fs::write(folder.join("bad.rhai"), "let a = 1;\nlet b = a + nothing_here;\n").unwrap();

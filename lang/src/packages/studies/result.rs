@@ -1,6 +1,6 @@
 //! The `Study` value: a table of results, a chart and notes, shown together.
 use crate::help::{FnDoc, Registrar};
-use crate::output::MimeBundle;
+use crate::output::{MimeBundle, INLINE_CHART_CLOSE, INLINE_CHART_OPEN};
 use crate::packages::charts::ChartValue;
 use crate::{Cell, Render, Table};
 use rhai::{Array, Dynamic, Map};
@@ -28,9 +28,10 @@ impl StudyValue {
         let table = self.table.render();
         let svg = self.chart.data.get("image/svg+xml").cloned().unwrap_or_default();
         let text = format!("{}\n{}", table.text_plain().unwrap_or_default(), self.chart.text_plain().unwrap_or_default());
-        let html = format!("{}\n<div class=\"spinfoil-chart\">{svg}</div>", table.data.get("text/html").cloned().unwrap_or_default());
-        // No image/svg+xml part: a terminal would then print only the title; `show(study.chart)`
-        // saves the chart there. The JSON part lets the terminal export the table.
+        let table_html = table.data.get("text/html").cloned().unwrap_or_default();
+        let html = format!("{table_html}\n{INLINE_CHART_OPEN}{svg}{INLINE_CHART_CLOSE}");
+        // No image/svg+xml part (a notebook would show the chart twice); a terminal saves the
+        // chart from the HTML (MimeBundle::inline_chart_svg). The JSON part lets it export the table.
         let json = table.data.get("application/json").cloned().unwrap_or_default();
         MimeBundle::plain(text).with("text/html", html).with("application/json", json)
     }
