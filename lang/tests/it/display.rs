@@ -327,6 +327,28 @@ mod charts {
     }
 
     #[test]
+    fn heat_map_ticks_sit_at_the_grid_values() {
+        let xs = vec![14.0, 17.0, 20.0, 23.0, 26.0];
+        let ys = vec![-10.0, 2.5, 15.0];
+        let values = ys.iter().map(|y| xs.iter().map(|x| x * 3.0 + y).collect()).collect();
+        let chart = HeatMap::new("Carry", Axis::new("speed", "m/s"), Axis::new("hyzer", "deg"), Axis::new("carry", "m")).grid(xs, ys, values);
+        let doc_text = svg::of(&chart.render());
+        let texts = svg::texts(&svg::parse(&doc_text));
+        for wanted in ["14", "17", "23", "26", "-10", "2.5", "15"] {
+            assert!(texts.iter().any(|t| t == wanted), "no tick {wanted:?} in {texts:?}");
+        }
+        for between in ["16", "18", "22", "24", "-5", "0", "5"] {
+            assert!(!texts.iter().any(|t| t == between), "a tick {between:?} between cells in {texts:?}");
+        }
+        // A grid too fine to label cell by cell keeps round-number ticks.
+        let fine: Vec<f64> = (0..30).map(|k| f64::from(k) * 20.0 / 29.0).collect();
+        let values = fine.iter().map(|y| fine.iter().map(|x| x + y).collect()).collect();
+        let chart = HeatMap::new("Fine", Axis::new("a", "m"), Axis::new("b", "m"), Axis::new("c", "m")).grid(fine.clone(), fine, values);
+        let texts = svg::texts(&svg::parse(&svg::of(&chart.render())));
+        assert!(texts.iter().any(|t| t == "10") && !texts.iter().any(|t| t == "0.69"), "{texts:?}");
+    }
+
+    #[test]
     fn scatter_draws_points_means_ellipses_and_caution() {
         let cloud: Vec<(f64, f64)> = (0..60).map(|i| { let t = i as f64; (90.0 + 5.0 * (t * 0.7).sin(), 10.0 + 3.0 * (t * 1.3).cos()) }).collect();
         let chart = ScatterEllipses::new("Landings", Axis::new("downrange x", "m"), Axis::new("lateral y", "m")).cloud(Series::new("P-7", cloud));

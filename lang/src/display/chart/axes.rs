@@ -50,6 +50,18 @@ pub(crate) fn draw_axes_with<'a, 'b>(
     y: &Axis,
     (x_ticks, bottom_px): (usize, u32),
 ) -> Result<Plot<'a, 'b>, Box<dyn std::error::Error>> {
+    draw_axes_ticked(area, bounds, (x, y), (x_ticks, 7), bottom_px)
+}
+
+/// As [`draw_axes_with`], with `y_ticks` labels on the y axis too (0: none, the caller labels
+/// its own values, as a heat map labels its grid values).
+pub(crate) fn draw_axes_ticked<'a, 'b>(
+    area: &'a Area<'b>,
+    bounds: Bounds,
+    (x, y): (&Axis, &Axis),
+    (x_ticks, y_ticks): (usize, usize),
+    bottom_px: u32,
+) -> Result<Plot<'a, 'b>, Box<dyn std::error::Error>> {
     let mut chart = ChartBuilder::on(area)
         .margin_top(TOP_MARGIN_PX)
         .margin_left(LEFT_MARGIN_PX)
@@ -63,7 +75,7 @@ pub(crate) fn draw_axes_with<'a, 'b>(
         .x_desc(x.label())
         .y_desc(y.label())
         .x_labels(x_ticks)
-        .y_labels(7)
+        .y_labels(y_ticks)
         .x_label_formatter(&tick_label)
         .y_label_formatter(&tick_label)
         .axis_desc_style(font::text(TEXT_PX, INK))

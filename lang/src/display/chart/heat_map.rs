@@ -7,7 +7,7 @@ use super::colour_scale::{scale_colour, wants_dark_text};
 use super::data::Axis;
 use super::font;
 use super::frame::{wrap, Area, Drawn, Frame};
-use crate::display::style::{text_width_px, CHART_WIDTH_PX, INK, MUTED_INK, SMALL_PX, TEXT_PX, TICK_PX};
+use crate::display::style::{text_width_px, AXIS_INK, CHART_WIDTH_PX, INK, MUTED_INK, SMALL_PX, TEXT_PX, TICK_PX};
 use crate::display::Render;
 use crate::MimeBundle;
 use plotters::element::{EmptyElement, Rectangle, Text};
@@ -76,8 +76,15 @@ impl HeatMap {
         let value_range = if range.width() > 0.0 { (range.x0, range.x1) } else { (range.x0 - 1.0, range.x1 + 1.0) };
         self.frame().draw(axes::body_px_for_plot(PLOT_HEIGHT_PX), |area| {
             let (left, right) = area.split_horizontally(CHART_WIDTH_PX - BAR_AREA_PX);
-            let mut plot = axes::draw_axes(&left, bounds, &self.x, &self.y)?;
+            // Ticks at the grid values (the cells' centres) when every value has room for its
+            // label; round-number ticks for grids too fine to label cell by cell.
+            let (label_x, label_y) = (labels_fit_x(&self.x_values), labels_fit_y(&self.y_values));
+            let auto_ticks = (if label_x { 0 } else { 9 }, if label_y { 0 } else { 7 });
+            let mut plot = axes::draw_axes_ticked(&left, bounds, (&self.x, &self.y), auto_ticks, axes::BOTTOM_AREA_PX)?;
             self.draw_cells(&mut plot, &xs, &ys, value_range)?;
+            let grid_x = if label_x { self.x_values.as_slice() } else { &[] };
+            let grid_y = if label_y { self.y_values.as_slice() } else { &[] };
+            draw_grid_labels(&mut plot, grid_x, grid_y, bounds)?;
             draw_colour_bar(&right, &self.value, value_range)
         })
     }
@@ -98,6 +105,37 @@ impl HeatMap {
         }
         Ok(())
     }
+}
+
+/// Pixels of plot width beside the colour bar, for spacing the x labels.
+fn plot_width_px() -> f64 {
+    axes::plot_px((CHART_WIDTH_PX - BAR_AREA_PX, 0)).0
+}
+
+/// Whether every grid value of the x axis has room for its label under its cell.
+fn labels_fit_x(xs: &[f64]) -> bool {
+    let widest = xs.iter().map(|x| text_width_px(&axes::tick_label(x), TICK_PX)).fold(0.0, f64::max);
+    plot_width_px() / xs.len().max(1) as f64 >= widest + 12.0
+}
+
+/// Whether every grid value of the y axis has room for its label beside its cell.
+fn labels_fit_y(ys: &[f64]) -> bool {
+    PLOT_HEIGHT_PX / ys.len().max(1) as f64 >= 2.0 * TICK_PX
+}
+
+/// Tick labels at the grid values `xs` under the x axis and `ys` left of the y axis.
+fn draw_grid_labels(plot: &mut Plot, xs: &[f64], ys: &[f64], bounds: Bounds) -> Drawn {
+    let x_style = font::anchored(font::text(TICK_PX, AXIS_INK), HPos::Center, VPos::Top);
+    for x in xs {
+        let label = EmptyElement::at((*x, bounds.y0)) + Text::new(axes::tick_label(x), (0, 6), x_style.clone());
+        plot.draw_series(std::iter::once(label))?;
+    }
+    let y_style = font::anchored(font::text(TICK_PX, AXIS_INK), HPos::Right, VPos::Center);
+    for y in ys {
+        let label = EmptyElement::at((bounds.x0, *y)) + Text::new(axes::tick_label(y), (-6, 0), y_style.clone());
+        plot.draw_series(std::iter::once(label))?;
+    }
+    Ok(())
 }
 
 /// Cell edges: halfway between neighbouring grid values, and as far out at both ends.
