@@ -116,15 +116,50 @@ pub(crate) fn register(reg: &mut Registrar) {
     );
     reg.text(|e: &mut EnvironmentValue| {
         let p = e.air_properties();
+        let ground = e.ground.as_ref().map_or(String::new(), |g| format!("; ground {g}"));
         format!(
-            "environment: air {:.4} kg/m³ at {:.1} °C, {:.1} hPa; wind {:.1} m/s from {:.0}°",
+            "environment: air {:.4} kg/m³ at {:.1} °C, {:.1} hPa; {}{ground}",
             p.density_kg_m3,
             p.temperature_k - 273.15,
             p.pressure_pa / 100.0,
-            e.wind.speed_mps,
-            e.wind.from_deg
+            wind_words(e.wind.speed_mps, e.wind.from_deg)
         )
     });
+}
+
+/// The wind in words: its speed, the direction it comes from and what that means for the
+/// throw (`wind 5.0 m/s from 0° (headwind)`), or `no wind`.
+fn wind_words(speed_mps: f64, from_deg: f64) -> String {
+    if speed_mps <= 0.0 {
+        return "no wind".to_string();
+    }
+    const SECTORS: [&str; 8] = [
+        "headwind",
+        "headwind from the left",
+        "from the left",
+        "tailwind from the left",
+        "tailwind",
+        "tailwind from the right",
+        "from the right",
+        "headwind from the right",
+    ];
+    let sector = ((from_deg.rem_euclid(360.0) + 22.5) / 45.0).floor() as usize % 8;
+    format!("wind {speed_mps:.1} m/s from {from_deg:.0}° ({})", SECTORS[sector])
+}
+
+#[cfg(test)]
+mod tests {
+    use super::wind_words;
+
+    #[test]
+    fn the_wind_says_where_it_comes_from() {
+        assert_eq!(wind_words(5.0, 0.0), "wind 5.0 m/s from 0° (headwind)");
+        assert_eq!(wind_words(3.0, 250.0), "wind 3.0 m/s from 250° (from the right)");
+        assert_eq!(wind_words(3.0, -90.0), "wind 3.0 m/s from -90° (from the right)");
+        assert_eq!(wind_words(2.0, 200.0), "wind 2.0 m/s from 200° (tailwind)");
+        assert_eq!(wind_words(2.0, 45.0), "wind 2.0 m/s from 45° (headwind from the left)");
+        assert_eq!(wind_words(0.0, 90.0), "no wind");
+    }
 }
 
 fn air_spec(v: &OptionValues) -> Fallible<AirSpec> {
