@@ -42,6 +42,7 @@ fn column(ctx: NativeCallContext, table: &mut Table, name: &str) -> Fallible<Arr
     Ok((0..table.rows.len())
         .map(|row| match table.cell(row, index) {
             Cell::Number(x) => Dynamic::from_float(*x),
+            Cell::Count(n) => Dynamic::from_float(*n as f64),
             Cell::Text(t) => Dynamic::from(t.clone()),
             Cell::Empty => Dynamic::UNIT,
         })

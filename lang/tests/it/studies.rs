@@ -129,6 +129,11 @@ fn dispersion_without_scatter_repeats_the_single_flight() {
     assert!((mean - carry).abs() < 1e-9, "{mean} vs {carry}");
     let sd = number(&mut s, "r.rows.filter(|r| r.quantity == \"landing sd x\")[0].value");
     assert!(sd.abs() < 1e-9, "no scatter, no spread: {sd}");
+    // Counts read as whole numbers (not "3.00"), and stay numbers for scripts.
+    let text = value(&mut s, "r.to_string()");
+    let flown = text.lines().find(|l| l.starts_with("throws flown")).unwrap_or_default();
+    assert!(flown.trim_end().ends_with(" 3"), "{text}");
+    assert_eq!(number(&mut s, "r.rows.filter(|r| r.quantity == \"throws flown\")[0].value"), 3.0);
 }
 
 #[test]

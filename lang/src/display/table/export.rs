@@ -75,5 +75,6 @@ fn csv_field(cell: &Cell) -> String {
             format!("\"{}\"", text.replace('"', "\"\""))
         }
         Cell::Text(text) => text.clone(),
+        Cell::Count(n) => n.to_string(),
     }
 }

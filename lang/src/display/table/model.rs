@@ -22,6 +22,9 @@ pub enum Cell {
     Number(f64),
     /// Text, shown as is (escaped in HTML).
     Text(String),
+    /// A count (throws, flights), shown as a whole number whatever the column's decimals;
+    /// exported and read back as a number.
+    Count(u64),
     /// No value.
     Empty,
 }
@@ -51,12 +54,13 @@ impl Cell {
             Cell::Number(value) if value.is_finite() => format!("{value:.decimals$}"),
             Cell::Number(_) | Cell::Empty => "—".to_string(),
             Cell::Text(text) => text.clone(),
+            Cell::Count(n) => n.to_string(),
         }
     }
 
     /// True for numbers (they are right-aligned).
     pub fn is_number(&self) -> bool {
-        matches!(self, Cell::Number(_))
+        matches!(self, Cell::Number(_) | Cell::Count(_))
     }
 }
 

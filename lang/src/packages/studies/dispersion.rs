@@ -141,15 +141,19 @@ pub(crate) fn dispersion_value(result: &DispersionResult, design: &str) -> Study
         .column("quantity", "", 0)
         .column("value", "", 2)
         .column("unit", "", 0);
-    let mut add = |name: &str, value: f64, unit: &str| {
-        table = std::mem::take(&mut table).row(vec![Cell::from(name), Cell::Number(value), Cell::from(unit)]);
+    let mut add_cell = |name: &str, value: Cell, unit: &str| {
+        table = std::mem::take(&mut table).row(vec![Cell::from(name), value, Cell::from(unit)]);
     };
+    let count = |n: usize| Cell::Count(n as u64);
     if result.summary.is_none() {
-        add(&format!("throws in shard {}", result.shard), result.rows.len() as f64, "");
+        add_cell(&format!("throws in shard {}", result.shard), count(result.rows.len()), "");
     }
     if let Some(summary) = &result.summary {
-        add("throws flown", summary.flown as f64, "");
-        add("throws failed", summary.failed as f64, "");
+        add_cell("throws flown", count(summary.flown), "");
+        add_cell("throws failed", count(summary.failed), "");
+    }
+    let mut add = |name: &str, value: f64, unit: &str| add_cell(name, Cell::Number(value), unit);
+    if let Some(summary) = &result.summary {
         add("mean carry", summary.mean_carry_m, "m");
         if let Some(stats) = &summary.landing {
             stats_rows(&mut add, "landing", stats);

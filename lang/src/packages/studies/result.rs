@@ -49,6 +49,7 @@ impl StudyValue {
                     .map(|(k, cell)| {
                         let value = match cell {
                             Cell::Number(x) => Dynamic::from_float(*x),
+                            Cell::Count(n) => Dynamic::from_float(*n as f64),
                             Cell::Text(t) => Dynamic::from(t.clone()),
                             Cell::Empty => Dynamic::UNIT,
                         };
