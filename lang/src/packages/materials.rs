@@ -21,5 +21,15 @@ pub(crate) fn register(reg: &mut Registrar) {
 
 fn material(ctx: NativeCallContext, name: &str, density_g_cm3: Dynamic) -> Fallible<Material> {
     let density = number_arg(&ctx, "density_g_cm3", &density_g_cm3, f64::MIN, f64::MAX)?;
-    Material::from_g_cm3(name, density).map_err(|e| design_error(&ctx, e))
+    Material::from_g_cm3(name, density).map_err(|e| design_error(&ctx, format!("{e}{}", kg_m3_hint(density))))
+}
+
+/// A hint for a density that reads like kg/m³ given where g/cm³ is expected (950 → 0.95).
+fn kg_m3_hint(density: f64) -> String {
+    if density > 30.0 && density <= 30_000.0 {
+        let g_cm3 = density / 1000.0;
+        format!("; material() takes g/cm³: for {density} kg/m³ write {g_cm3}")
+    } else {
+        String::new()
+    }
 }

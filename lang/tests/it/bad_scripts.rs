@@ -47,6 +47,7 @@ const CATALOGUE: &[(&str, &str, &str)] = &[
     // Impossible discs.
     ("material(\"void\", -0.5)", "DesignError", "has density -500 kg/m³"),
     ("material(\"void\", 0)", "DesignError", "allowed range"),
+    ("material(\"base\", 950)", "DesignError", "material() takes g/cm³: for 950 kg/m³ write 0.95"),
     ("driver_outline(#{ rim_width_cm: 12 })", "DesignError", "rim_width_cm = 12 is outside its allowed range"),
     ("driver_outline(#{ plate_mm: 30 })", "DesignError", "plate_mm = 30 is outside its allowed range"),
     ("disc(\"x\", driver_outline(), rim_layup(rim, plate, #{ split_radius_cm: 15 }))", "DesignError", "split radius"),
@@ -66,6 +67,8 @@ const CATALOGUE: &[(&str, &str, &str)] = &[
     ("d.I_z", "NameError", "Disc has no field 'I_z'; I_z is the field 'spin_inertia_g_cm2'"),
     ("d.spin_inertia_kg_m2", "NameError", "Disc has no field 'spin_inertia_kg_m2'; did you mean 'spin_inertia_g_cm2'?"),
     ("compare_mass([1, 2])", "ValueError", "item 0 is a int, not a Disc"),
+    ("sweep(d, t, environment(), #{ input: \"throw.sped_mps\", from: 16, to: 28 })", "ValueError", "unknown input \"throw.sped_mps\"; did you mean \"throw.speed_mps\"? known inputs: throw.speed_mps"),
+    ("sweep(d, t, environment(), #{ input: \"speed_mps\", from: 16, to: 28, metrics: [\"carry\"] })", "ValueError", "unknown metric \"carry\"; did you mean \"carry_m\"?"),
     ("compare([])", "ValueError", "give at least one Flight"),
     // Runaway work and huge data.
     ("loop { }", "LimitError", "operations (limit max_operations)"),

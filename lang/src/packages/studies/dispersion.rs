@@ -2,6 +2,7 @@
 //! table, the scatter chart with 50 %/95 % ellipses and the safety caution.
 use super::case::{input_name, study_case};
 use super::control::watched;
+use super::options::study_error_text;
 use super::result::StudyValue;
 use super::shards::{current_shard, keep, next_ordinal, Partial};
 use crate::help::{FnDoc, Registrar};
@@ -122,7 +123,7 @@ fn scatter_list(ctx: &NativeCallContext, value: Dynamic, case: &mut StudyCase) -
     let mut list = Vec::new();
     for (key, v) in map {
         let input = input_name(&key);
-        input_unit(&input).map_err(|e| value_error(ctx, format!("scatter: {e}")))?;
+        input_unit(&input).map_err(|e| value_error(ctx, format!("scatter: {}", study_error_text(&e))))?;
         let s = v.clone().try_cast::<SpreadValue>().ok_or_else(|| {
             value_error(ctx, format!("scatter.{key} must be normal(mean, sd) or uniform(low, high), got {v}"))
         })?;

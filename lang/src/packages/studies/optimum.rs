@@ -2,7 +2,7 @@
 //! nearest a target.
 use super::case::{input_name, study_case};
 use super::control::watched;
-use super::options::{lists_only, number_list, take_list, text_list};
+use super::options::{lists_only, number_list, study_error_text, take_list, text_list};
 use super::result::StudyValue;
 use super::sweep::plain_name;
 use crate::help::{FnDoc, Registrar};
@@ -50,7 +50,7 @@ fn best(
     let mut variables = Vec::new();
     for key in text_list(ctx, "vary", &vary)? {
         let input = input_name(&key);
-        input_unit(&input).map_err(|e| value_error(ctx, e.to_string()))?;
+        input_unit(&input).map_err(|e| value_error(ctx, study_error_text(&e)))?;
         let range = bounds.get(key.as_str()).or_else(|| bounds.get(input.as_str())).and_then(|b| b.clone().try_cast::<rhai::Array>());
         let range = range.ok_or_else(|| value_error(ctx, format!("bounds has no [low, high] for {key}")))?;
         let pair = number_list(ctx, &format!("bounds.{key}"), &range)?;

@@ -39,3 +39,18 @@ pub(crate) fn lists_only(ctx: &NativeCallContext, opts: &crate::options::OptionV
         None => Ok(()),
     }
 }
+
+/// A study error as the user reads it: an unknown input or metric also names the nearest known
+/// one (`throw.sped_mps` → `throw.speed_mps`, `carry` → `carry_m`).
+pub(crate) fn study_error_text(error: &spinfoil_engine::StudyError) -> String {
+    use spinfoil_engine::StudyError as E;
+    let (what, name, known) = match error {
+        E::UnknownInput { name, known } => ("input", name, known),
+        E::UnknownMetric { name, known } => ("metric", name, known),
+        other => return other.to_string(),
+    };
+    match crate::errors::closest(name, known.split(", ")) {
+        Some(near) => format!("unknown {what} \"{name}\"; did you mean \"{near}\"? known {what}s: {known}"),
+        None => error.to_string(),
+    }
+}

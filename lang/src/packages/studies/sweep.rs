@@ -1,7 +1,7 @@
 //! `sweep`: one or two inputs over ranges or listed values; a table and a line chart or heat map.
 use super::case::{input_name, study_case};
 use super::control::watched;
-use super::options::{lists_only, number_list, take_list, text_list};
+use super::options::{lists_only, number_list, study_error_text, take_list, text_list};
 use super::result::{input_title, StudyValue};
 use super::shards::{current_shard, keep, next_ordinal, Partial};
 use crate::help::{FnDoc, Registrar};
@@ -60,7 +60,7 @@ fn sweep(
         None => vec!["carry_m".into(), "turn_m".into(), "fade_m".into()],
     };
     for m in &metrics {
-        metric_unit(m).map_err(|e| value_error(ctx, e.to_string()))?;
+        metric_unit(m).map_err(|e| value_error(ctx, study_error_text(&e)))?;
     }
     let spec = SweepSpec { axes, metrics };
     let case = study_case(disc, throw, env).map_err(|e| value_error(ctx, e))?;
@@ -78,7 +78,7 @@ fn sweep(
 fn axis(ctx: &NativeCallContext, opts: &OptionValues, suffix: &str, values: Option<rhai::Array>) -> Fallible<SweepAxis> {
     let key = format!("input{suffix}");
     let input = input_name(opts.text(&key).ok_or_else(|| value_error(ctx, format!("give {key}, e.g. \"throw.launch_deg\"")))?);
-    input_unit(&input).map_err(|e| value_error(ctx, e.to_string()))?;
+    input_unit(&input).map_err(|e| value_error(ctx, study_error_text(&e)))?;
     if let Some(list) = values {
         return Ok(SweepAxis::values(input, number_list(ctx, &format!("values{suffix}"), &list)?));
     }
