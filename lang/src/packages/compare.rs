@@ -9,8 +9,9 @@ use rhai::{Array, NativeCallContext};
 /// Registers `compare` (flights).
 pub(crate) fn register_compare_flights(reg: &mut Registrar) {
     reg.engine.register_fn("compare", compare_flights);
+    reg.engine.register_fn("compare", |f: FlightValue| flight_table(&[f]));
     reg.doc(FnDoc::new(
-        "compare(flights: array of Flight) -> Table",
+        "compare(flights: Flight or array of Flight) -> Table",
         "A table of flights side by side: release speed (m/s) and spin (rpm), carry, apex, turn and fade (m), time aloft (s), landing spin (rpm) and spin kept (%); with a ground in the environment also ground play and rest distance (m). Predictions are estimates (see the note under the table).",
         "compare([fly(a, arm, day), fly(b, arm, day)])",
     ));

@@ -432,6 +432,8 @@ fn a_ground_in_the_environment_plays_the_landing_out_to_rest() {
     assert_eq!(value(&mut s, "type_of(fly(one_piece, t).ground_play_m)"), "()", "no ground, no ground play");
     let rest = value(&mut s, "compare([f]).column(\"rest distance\")[0]").parse::<f64>().unwrap();
     assert!((rest - to_rest.rest_distance_m()).abs() <= 1e-9 * rest, "{rest} vs {}", to_rest.rest_distance_m());
+    // One flight needs no array, as in plan_view(f).
+    assert_eq!(value(&mut s, "compare(f).to_csv()"), value(&mut s, "compare([f]).to_csv()"));
 }
 
 #[test]
