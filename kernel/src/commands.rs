@@ -57,12 +57,24 @@ fn run(args: RunArgs) -> anyhow::Result<Outcome> {
 
 /// Writes OUT/merge.rhai (which shows every merged study) and runs it on FOLDER's partial files.
 fn merge(args: MergeArgs) -> anyhow::Result<Outcome> {
+    if !args.folder.is_dir() {
+        anyhow::bail!("cannot read the shard folder {}: not a folder (give the --out folder of the `run --shard` runs)", args.folder.display());
+    }
+    if !has_partial_results(&args.folder) {
+        anyhow::bail!("no partial-*.json files in {}: run the script with `--shard i/N --out {0}` first", args.folder.display());
+    }
     std::fs::create_dir_all(&args.out).with_context(|| format!("cannot create {}", args.out.display()))?;
     let script = args.out.join("merge.rhai");
     let code = "// Merges the partial results of a sharded run (spinfoil merge).\nfor study in merge_shards() { show(study); }\n";
     std::fs::write(&script, code).with_context(|| format!("cannot write {}", script.display()))?;
     std::env::set_var(SHARD_DIR_VAR, &args.folder);
     run_and_report(&script, args.out.clone(), args.tables, &SandboxArgs { study_dir: Some(args.out), ..SandboxArgs::default() })
+}
+
+/// Whether `folder` holds partial results of a sharded run (`partial-*.json`).
+fn has_partial_results(folder: &Path) -> bool {
+    let is_partial = |name: &str| name.starts_with("partial-") && name.ends_with(".json");
+    std::fs::read_dir(folder).is_ok_and(|entries| entries.flatten().any(|e| is_partial(&e.file_name().to_string_lossy())))
 }
 
 fn run_and_report(script: &Path, out: PathBuf, tables: Option<TableFormat>, sandbox: &SandboxArgs) -> anyhow::Result<Outcome> {
@@ -81,6 +93,10 @@ fn run_and_report(script: &Path, out: PathBuf, tables: Option<TableFormat>, sand
 }
 
 fn report(args: ReportArgs) -> anyhow::Result<Outcome> {
+    if args.notebook.extension().is_some_and(|e| e == "rhai") {
+        let path = args.notebook.display();
+        anyhow::bail!("{path} is a study script, not a notebook: run it with `spinfoil run {path}`");
+    }
     let mut notebook = Notebook::load(&args.notebook)?;
     let observer = Arc::new(ProgressBoardSink::default());
     let session = args.sandbox.settings(Some(&args.notebook));

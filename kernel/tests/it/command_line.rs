@@ -72,6 +72,28 @@ fn a_missing_file_exits_with_3_and_a_bad_option_with_2() {
 }
 
 #[test]
+fn wrong_files_get_one_clear_line_and_exit_code_3() {
+    let folder = scratch("wrong-files");
+    std::fs::write(folder.join("study.rhai"), STUDY).unwrap();
+    let script = folder.join("study.rhai");
+    let report = spinfoil(&["report", script.to_str().unwrap(), "--out", folder.join("out").to_str().unwrap()], "");
+    assert_eq!(report.status.code(), Some(3));
+    assert!(text(&report).1.contains("is a study script, not a notebook: run it with `spinfoil run"), "{}", text(&report).1);
+    let folder_as_script = spinfoil(&["run", folder.to_str().unwrap(), "--out", folder.join("out").to_str().unwrap()], "");
+    let stderr = text(&folder_as_script).1;
+    assert_eq!(folder_as_script.status.code(), Some(3));
+    assert_eq!(stderr.matches("os error").count(), 1, "the cause once: {stderr}");
+    let merge = spinfoil(&["merge", folder.join("no-such-parts").to_str().unwrap(), "--out", folder.join("merged").to_str().unwrap()], "");
+    let stderr = text(&merge).1;
+    assert_eq!(merge.status.code(), Some(3), "{stderr}");
+    assert!(stderr.contains("cannot read the shard folder") && !stderr.contains("merge.rhai"), "{stderr}");
+    let empty = spinfoil(&["merge", folder.to_str().unwrap(), "--out", folder.join("merged").to_str().unwrap()], "");
+    let stderr = text(&empty).1;
+    assert_eq!(empty.status.code(), Some(3), "{stderr}");
+    assert!(stderr.contains("no partial-*.json files in") && !stderr.contains("merge.rhai"), "{stderr}");
+}
+
+#[test]
 fn report_writes_the_executed_notebook_and_html() {
     let folder = scratch("report");
     let notebook = serde_json::json!({"nbformat": 4, "nbformat_minor": 5, "metadata": {}, "cells": [
