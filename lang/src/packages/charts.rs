@@ -65,7 +65,7 @@ fn register_flight_charts(reg: &mut Registrar) {
         Ok::<_, Box<rhai::EvalAltResult>>(ChartValue::of(&time_series(&flights_arg(&ctx, items)?)))
     });
     reg.engine.register_fn("time_series", |f: FlightValue| ChartValue::of(&time_series(&[f])));
-    reg.doc(FnDoc::new("time_series(flights: Flight or array of Flight) -> Chart", "Speed (m/s), spin (rpm), roll (°, hyzer positive), angle of attack (°) and wobble (°) against time (s), one panel each. The wobble panel shows a thin band even for a clean release: the pitching moment keeps the wobble angle oscillating at the cone rate (about 30 Hz, see wobble_frequency_hz), faster than samples 10 ms apart can draw as a smooth wave; read the band's middle as the wobble and its width as that oscillation.", "time_series([a, b])"));
+    reg.doc(FnDoc::new("time_series(flights: Flight or array of Flight) -> Chart", "Speed (m/s), spin (rpm), roll (°, hyzer positive), angle of attack (°) and wobble (°) against time (s), one panel each. The wobble panel shows a thin band even for a clean release: the pitching moment keeps the wobble angle oscillating at the cone rate (about twice the spin rate, some 30 Hz at 900 rpm; see wobble_frequency_hz), faster than samples 10 ms apart can draw as a smooth wave; read the band's middle as the wobble and its width as that oscillation.", "time_series([a, b])"));
 }
 
 fn register_disc_charts(reg: &mut Registrar) {

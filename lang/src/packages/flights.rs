@@ -265,7 +265,7 @@ fn register_wobble_view(reg: &mut Registrar) {
     reg.engine.register_fn("wobble_view", |f: FlightValue| wobble_view(&[f]));
     reg.doc(FnDoc::new(
         "wobble_view(flights: Flight or array of Flight) -> Chart",
-        "The wobble angle (°, between the disc's axis and its angular momentum) against time (s) over the first part of each flight, one line per flight, to compare how fast the air damps an off-axis release. The small saw-tooth on each line is the angle's own oscillation at the cone rate (wobble_frequency_hz, about 30 Hz), sampled every 10 ms.",
+        "The wobble angle (°, between the disc's axis and its angular momentum) against time (s) over the first part of each flight, one line per flight, to compare how fast the air damps an off-axis release. The small saw-tooth on each line is the angle's own oscillation at the cone rate (wobble_frequency_hz: about twice the spin rate, some 30 Hz at 900 rpm), sampled every 10 ms.",
         "wobble_view([fly(one_piece, wobbly), fly(rim_heavy, wobbly)])",
     ));
 }
