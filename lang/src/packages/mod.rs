@@ -9,6 +9,7 @@ mod flight_name;
 mod flights;
 mod layups;
 mod materials;
+mod numbers;
 mod outlines;
 mod pause;
 mod show;
@@ -46,6 +47,7 @@ pub(crate) fn register_packages(reg: &mut Registrar, context: &PackageContext) {
     environments::register(reg);
     flights::register(reg);
     tables::register(reg);
+    numbers::register(reg);
     charts::register(reg);
     studies::register(reg, context);
     show::register(reg, context);

@@ -70,6 +70,7 @@ const CATALOGUE: &[(&str, &str, &str)] = &[
     ("sweep(d, t, environment(), #{ input: \"throw.sped_mps\", from: 16, to: 28 })", "ValueError", "unknown input \"throw.sped_mps\"; did you mean \"throw.speed_mps\"? known inputs: throw.speed_mps"),
     ("sweep(d, t, environment(), #{ input: \"speed_mps\", from: 16, to: 28, metrics: [\"carry\"] })", "ValueError", "unknown metric \"carry\"; did you mean \"carry_m\"?"),
     ("compare([])", "ValueError", "give at least one Flight"),
+    ("round(1.5, 20)", "ValueError", "round: decimals = 20 is out of range; expected a whole number from 0 to 12"),
     // Runaway work and huge data.
     ("loop { }", "LimitError", "operations (limit max_operations)"),
     ("let n = 0; while true { n += 1; }", "LimitError", "operations"),
