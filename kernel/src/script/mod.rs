@@ -2,6 +2,7 @@
 mod progress;
 mod prompt;
 mod run;
+mod shell_completion;
 mod terminal;
 
 pub use progress::{fraction, ProgressBoard, ProgressBoardSink};

@@ -1,15 +1,22 @@
 //! The interactive prompt: one session, line editing and history (rustyline), multi-line input
 //! until the session says the code is complete, Ctrl-C stopping a running cell.
+use super::shell_completion::ShellHelper;
 use super::terminal::TerminalSink;
 use crate::error_report::ErrorReport;
 use rustyline::error::ReadlineError;
-use rustyline::DefaultEditor;
+use rustyline::history::DefaultHistory;
+use rustyline::Editor;
 use spinfoil_lang::{Completeness, InterruptHandle, Session, SessionSettings};
+use std::cell::RefCell;
 use std::path::{Path, PathBuf};
+use std::rc::Rc;
 use std::sync::Arc;
 
 const PROMPT: &str = "spinfoil> ";
 const MORE: &str = "      ..> ";
+
+/// The prompt's line editor, completing with the session (Tab).
+type ShellEditor = Editor<ShellHelper, DefaultHistory>;
 
 /// Why the prompt could not run.
 #[derive(Debug, thiserror::Error)]
@@ -23,18 +30,22 @@ pub enum PromptError {
 /// Runs the prompt until end of input (Ctrl-D) in a session with `settings`; charts go into
 /// `out_dir`.
 pub fn run_prompt(out_dir: &Path, settings: SessionSettings) -> Result<(), PromptError> {
-    let mut editor = DefaultEditor::new()?;
+    let session = Session::new(settings);
+    stop_cells_on_ctrl_c(session.interrupt_handle());
+    let session = Rc::new(RefCell::new(session));
+    // Tab completes the common prefix; a second Tab lists the candidates (as shells do).
+    let config = rustyline::Config::builder().completion_type(rustyline::CompletionType::List).build();
+    let mut editor = ShellEditor::with_config(config)?;
+    editor.set_helper(Some(ShellHelper::new(session.clone())));
     let history = history_file();
     if let Some(file) = &history {
         let _ = editor.load_history(file);
     }
-    let mut session = Session::new(settings);
-    stop_cells_on_ctrl_c(session.interrupt_handle());
     let sink = Arc::new(TerminalSink::new(out_dir, None));
     println!("Spinfoil {} - type help() for the functions, Ctrl-D to leave.", env!("CARGO_PKG_VERSION"));
     while let Some(code) = read_cell(&mut editor, &session) {
         let _ = editor.add_history_entry(code.trim_end());
-        run_cell(&mut session, &sink, &code);
+        run_cell(&mut session.borrow_mut(), &sink, &code);
     }
     if let Some(file) = &history {
         let _ = std::fs::create_dir_all(file.parent().unwrap_or(Path::new(".")));
@@ -44,10 +55,13 @@ pub fn run_prompt(out_dir: &Path, settings: SessionSettings) -> Result<(), Promp
 }
 
 /// Reads lines until they form a complete (or hopelessly invalid) cell; None at end of input.
-fn read_cell(editor: &mut DefaultEditor, session: &Session) -> Option<String> {
+fn read_cell(editor: &mut ShellEditor, session: &RefCell<Session>) -> Option<String> {
     let mut code = String::new();
     loop {
         let prompt = if code.is_empty() { PROMPT } else { MORE };
+        if let Some(helper) = editor.helper() {
+            helper.set_pending(&code);
+        }
         match editor.readline(prompt) {
             Ok(line) => code.push_str(&line),
             Err(ReadlineError::Interrupted) => {
@@ -59,7 +73,7 @@ fn read_cell(editor: &mut DefaultEditor, session: &Session) -> Option<String> {
         code.push('\n');
         if code.trim().is_empty() {
             code.clear();
-        } else if !matches!(session.is_complete(&code), Completeness::Incomplete { .. }) {
+        } else if !matches!(session.borrow().is_complete(&code), Completeness::Incomplete { .. }) {
             return Some(code);
         }
     }
