@@ -38,10 +38,10 @@ mod tests {
 
     #[test]
     fn causes_already_quoted_are_not_repeated() {
-        let io = std::io::Error::new(std::io::ErrorKind::Other, "Is a directory");
+        let io = std::io::Error::other("Is a directory");
         let quoted = anyhow::Error::from(io).context("cannot read script x: Is a directory");
         assert_eq!(failure_text(&quoted), "cannot read script x: Is a directory");
-        let io = std::io::Error::new(std::io::ErrorKind::Other, "disk full");
+        let io = std::io::Error::other("disk full");
         let unquoted = anyhow::Error::from(io).context("cannot write report");
         assert_eq!(failure_text(&unquoted), "cannot write report: disk full");
     }

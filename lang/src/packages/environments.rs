@@ -147,20 +147,6 @@ fn wind_words(speed_mps: f64, from_deg: f64) -> String {
     format!("wind {speed_mps:.1} m/s from {from_deg:.0}° ({})", SECTORS[sector])
 }
 
-#[cfg(test)]
-mod tests {
-    use super::wind_words;
-
-    #[test]
-    fn the_wind_says_where_it_comes_from() {
-        assert_eq!(wind_words(5.0, 0.0), "wind 5.0 m/s from 0° (headwind)");
-        assert_eq!(wind_words(3.0, 250.0), "wind 3.0 m/s from 250° (from the right)");
-        assert_eq!(wind_words(3.0, -90.0), "wind 3.0 m/s from -90° (from the right)");
-        assert_eq!(wind_words(2.0, 200.0), "wind 2.0 m/s from 200° (tailwind)");
-        assert_eq!(wind_words(2.0, 45.0), "wind 2.0 m/s from 45° (headwind from the left)");
-        assert_eq!(wind_words(0.0, 90.0), "no wind");
-    }
-}
 
 fn air_spec(v: &OptionValues) -> Fallible<AirSpec> {
     let spec = match (v.number("altitude_m"), v.number("pressure_hpa"), v.number("temperature_c")) {
@@ -197,4 +183,19 @@ fn environment(ctx: NativeCallContext, opts: Map) -> Fallible<EnvironmentValue> 
     let mut environment = EnvironmentValue::build(air_spec(&v)?, wind_spec(&v)).map_err(|e| design_error(&ctx, e))?;
     environment.ground = v.text("ground").map(str::to_string);
     Ok(environment)
+}
+
+#[cfg(test)]
+mod tests {
+    use super::wind_words;
+
+    #[test]
+    fn the_wind_says_where_it_comes_from() {
+        assert_eq!(wind_words(5.0, 0.0), "wind 5.0 m/s from 0° (headwind)");
+        assert_eq!(wind_words(3.0, 250.0), "wind 3.0 m/s from 250° (from the right)");
+        assert_eq!(wind_words(3.0, -90.0), "wind 3.0 m/s from -90° (from the right)");
+        assert_eq!(wind_words(2.0, 200.0), "wind 2.0 m/s from 200° (tailwind)");
+        assert_eq!(wind_words(2.0, 45.0), "wind 2.0 m/s from 45° (headwind from the left)");
+        assert_eq!(wind_words(0.0, 90.0), "no wind");
+    }
 }
