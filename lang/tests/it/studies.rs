@@ -50,6 +50,20 @@ fn a_sweep_equals_single_flights_at_its_points() {
 }
 
 #[test]
+fn a_one_way_sweep_draws_a_panel_per_metric_when_one_scale_would_flatten_some() {
+    let mut s = session();
+    // Carry (tens of m) beside turn (a few m), and a metric in s: a panel each, none dropped.
+    value(&mut s, "let r = sweep(one_piece, t, day, #{ input: \"throw.speed_mps\", from: 16, to: 28, count: 3, metrics: [\"carry_m\", \"turn_m\", \"time_aloft_s\"] });");
+    let chart = svg(&mut s, "r");
+    for label in ["One panel per quantity", "against release speed", "carry (m)", "turn (m)", "time aloft (s)", "release speed (m/s)"] {
+        assert!(chart.contains(label), "panels lack {label}");
+    }
+    // Turn and fade of similar size share one scale: one line chart.
+    value(&mut s, "let r2 = sweep(one_piece, t, day, #{ input: \"throw.speed_mps\", values: [20, 24], metrics: [\"carry_m\"] });");
+    assert!(!svg(&mut s, "r2").contains("One panel per quantity"));
+}
+
+#[test]
 fn a_two_way_sweep_with_listed_values_draws_a_heat_map() {
     let mut s = session();
     value(&mut s, "let r = sweep(one_piece, t, day, #{ input: \"launch_deg\", values: [6, 12], input2: \"hyzer_deg\", values2: [-10, 0, 10], metrics: [\"carry_m\"] });");

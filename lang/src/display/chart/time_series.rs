@@ -1,5 +1,6 @@
 //! Time series as small multiples: one panel per quantity (each with its own unit), stacked
-//! over a shared time axis, one colour per flight across all panels.
+//! over a shared time axis (or another shared x axis, for sweeps), one colour per flight across
+//! all panels.
 
 use super::axes;
 use super::bounds::Bounds;
@@ -11,6 +12,8 @@ use crate::display::Render;
 use crate::MimeBundle;
 
 const PANEL_PLOT_PX: f64 = 130.0;
+/// The default shared x axis.
+const TIME_TITLE: &str = "time since release";
 /// Room under a panel that is not the last one: tick labels only.
 const INNER_BOTTOM_PX: u32 = 26;
 
@@ -43,18 +46,30 @@ pub struct TimeSeries {
     pub title: String,
     /// The panels, top to bottom.
     pub panels: Vec<Panel>,
+    /// The shared x axis: time since release (s) unless set with [`TimeSeries::against`].
+    pub x_axis: Axis,
 }
 
 impl TimeSeries {
     /// An empty time-series chart with a title.
     pub fn new(title: impl Into<String>) -> Self {
-        Self { title: title.into(), panels: Vec::new() }
+        Self { title: title.into(), panels: Vec::new(), x_axis: Axis::new(TIME_TITLE, "s") }
+    }
+
+    /// The same small multiples against another shared x axis (e.g. a swept input).
+    pub fn against(mut self, x_axis: Axis) -> Self {
+        self.x_axis = x_axis;
+        self
     }
 
     /// Adds a panel.
     pub fn panel(mut self, panel: Panel) -> Self {
         self.panels.push(panel);
         self
+    }
+
+    fn against_time(&self) -> bool {
+        self.x_axis.title == TIME_TITLE
     }
 
     /// Every series label in order of first appearance (their colour order).
@@ -73,7 +88,13 @@ impl TimeSeries {
         let entries = legend.map(|(index, label)| LegendEntry::new(series_swatch(index), label));
         let frame = Frame::new(&self.title).legend(entries.collect());
         // A single panel needs no word on how the panels are laid out.
-        if self.panels.len() > 1 { frame.subtitle("One panel per quantity, all on the same time axis") } else { frame }
+        if self.panels.len() <= 1 {
+            frame
+        } else if self.against_time() {
+            frame.subtitle("One panel per quantity, all on the same time axis")
+        } else {
+            frame.subtitle(format!("One panel per quantity (each with its own scale), all against {}", self.x_axis.title))
+        }
     }
 
     /// The chart as SVG.
@@ -102,7 +123,7 @@ impl TimeSeries {
 
     fn draw_panel(&self, cell: &Area, panel: &Panel, bounds: Bounds, labels: &[String], last: bool) -> Drawn {
         let (time_axis, bottom_px) =
-            if last { (Axis::new("time since release", "s"), axes::BOTTOM_AREA_PX) } else { (Axis::new("", ""), INNER_BOTTOM_PX) };
+            if last { (self.x_axis.clone(), axes::BOTTOM_AREA_PX) } else { (Axis::new("", ""), INNER_BOTTOM_PX) };
         let mut plot = axes::draw_axes_with(cell, bounds, &time_axis, &panel.quantity, (9, bottom_px))?;
         if bounds.y0 < 0.0 && bounds.y1 > 0.0 {
             draw_zero_line(&mut plot, bounds)?;
@@ -117,7 +138,7 @@ impl TimeSeries {
 
 impl Render for TimeSeries {
     fn render(&self) -> MimeBundle {
-        let time = Axis::new("time", "s");
+        let time = if self.against_time() { Axis::new("time", "s") } else { self.x_axis.clone() };
         let mut lines = vec![format!("{} — {} panel(s) against {}", self.title, self.panels.len(), time.label())];
         for panel in &self.panels {
             lines.push(series_summary(&panel.quantity.label(), &time, &panel.quantity, &panel.series));

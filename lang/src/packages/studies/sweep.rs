@@ -1,4 +1,5 @@
-//! `sweep`: one or two inputs over ranges or listed values; a table and a line chart or heat map.
+//! `sweep`: one or two inputs over ranges or listed values; a table and a line chart (or a panel
+//! per metric) or a heat map.
 use super::case::{input_name, study_case};
 use super::control::watched;
 use super::options::{lists_only, number_list, study_error_text, take_list, text_list};
@@ -8,7 +9,7 @@ use crate::help::{FnDoc, Registrar};
 use crate::options::{OptionKind, OptionSpec, OptionValues};
 use crate::packages::args::{options, value_error, Fallible};
 use crate::packages::{DiscValue, EnvironmentValue, PackageContext, ThrowValue};
-use crate::{Axis, Cell, HeatMap, LineChart, Series, Table};
+use crate::{Axis, Cell, HeatMap, LineChart, Panel, Series, Table, TimeSeries};
 use rhai::{Map, NativeCallContext};
 use spinfoil_engine::{input_unit, metric_unit, run_sweep, SweepAxis, SweepResult, SweepSpec};
 
@@ -33,7 +34,7 @@ pub(crate) const SWEEP_OPTIONS: &[OptionSpec] = &[
 pub(crate) fn register(reg: &mut Registrar, context: &PackageContext) {
     super::register_case_study(reg, context, "sweep", sweep, FnDoc::new(
         "sweep(disc: Disc, throw: Throw, environment: Environment, options: map) -> Study",
-        "Flies the throw once per value of one input (a line chart of the metrics against it) or per pair of values of two inputs (a heat map of the first metric). Options: input, from, to, count (or values: [...]); input2, from2, to2, count2 (or values2: [...]); metrics: [...] (default [\"carry_m\", \"turn_m\", \"fade_m\"]; see study_metrics()). Units are those in the names. Points that fail show an error in their row. Progress is shown; an interrupt stops the sweep.",
+        "Flies the throw once per value of one input (a line chart of the metrics against it; a panel per metric when their units differ or one shared scale would flatten some) or per pair of values of two inputs (a heat map of the first metric). Options: input, from, to, count (or values: [...]); input2, from2, to2, count2 (or values2: [...]); metrics: [...] (default [\"carry_m\", \"turn_m\", \"fade_m\"]; see study_metrics()). Units are those in the names. Points that fail show an error in their row. Progress is shown; an interrupt stops the sweep.",
         "sweep(d, throw_release(#{ speed_mps: 22, spin_rpm: 900, launch_deg: 10 }), environment(),\n      #{ input: \"throw.speed_mps\", from: 16, to: 28, count: 7, metrics: [\"carry_m\", \"turn_m\", \"fade_m\"] })",
     ));
 }
@@ -121,7 +122,49 @@ pub(crate) fn sweep_value(result: &SweepResult, design: &str) -> StudyValue {
         table = table.row(cells);
     }
     table = table.note(crate::SAFETY_CAUTION);
-    if spec.axes.len() == 1 { StudyValue::new(table, &line_chart(result, design)) } else { StudyValue::new(table, &heat_map(result, design)) }
+    if spec.axes.len() == 2 {
+        StudyValue::new(table, &heat_map(result, design))
+    } else if needs_panels(result) {
+        StudyValue::new(table, &panels(result, design))
+    } else {
+        StudyValue::new(table, &line_chart(result, design))
+    }
+}
+
+/// A one-way sweep's points of metric `k`: (input, value).
+fn metric_points(result: &SweepResult, k: usize) -> Vec<(f64, f64)> {
+    result.rows.iter().map(|r| (r.inputs[0], r.values.get(k).copied().unwrap_or(f64::NAN))).collect()
+}
+
+/// Whether a one-way sweep's metrics need a panel each: they have different units, or on one
+/// shared scale some metric would vary over less than a fifth of the axis and look flat.
+fn needs_panels(result: &SweepResult) -> bool {
+    let units = &result.metric_units;
+    if units.len() < 2 {
+        return false;
+    }
+    if units.iter().any(|u| *u != units[0]) {
+        return true;
+    }
+    let span = |values: &mut dyn Iterator<Item = f64>| {
+        let (lo, hi) = values.filter(|v| v.is_finite()).fold((f64::INFINITY, f64::NEG_INFINITY), |(lo, hi), v| (lo.min(v), hi.max(v)));
+        if lo <= hi { Some((lo, hi)) } else { None }
+    };
+    let spans: Vec<(f64, f64)> =
+        (0..units.len()).filter_map(|k| span(&mut metric_points(result, k).into_iter().map(|p| p.1))).collect();
+    let Some((lo, hi)) = span(&mut spans.iter().flat_map(|s| [s.0, s.1])) else { return false };
+    hi > lo && spans.iter().any(|s| s.1 - s.0 < 0.2 * (hi - lo))
+}
+
+/// One panel per metric (its own unit and scale) against the swept input.
+fn panels(result: &SweepResult, design: &str) -> TimeSeries {
+    let spec = &result.spec;
+    let x = Axis::new(input_title(&spec.axes[0].input), result.input_units[0].clone());
+    let chart = TimeSeries::new(format!("Sweep of {design}")).against(x);
+    spec.metrics.iter().enumerate().fold(chart, |chart, (k, m)| {
+        let quantity = Axis::new(plain_name(m), result.metric_units[k].clone());
+        chart.panel(Panel::new(quantity).series(Series::new(plain_name(m), metric_points(result, k))))
+    })
 }
 
 fn line_chart(result: &SweepResult, design: &str) -> LineChart {
@@ -132,8 +175,7 @@ fn line_chart(result: &SweepResult, design: &str) -> LineChart {
     let mut chart = LineChart::new(format!("Sweep of {design}"), x, Axis::new(y_title, unit.clone()));
     chart.zero_line = true;
     for (k, m) in spec.metrics.iter().enumerate().filter(|(k, _)| result.metric_units[*k] == unit) {
-        let points = result.rows.iter().map(|r| (r.inputs[0], r.values.get(k).copied().unwrap_or(f64::NAN))).collect();
-        chart = chart.series(Series::new(plain_name(m), points));
+        chart = chart.series(Series::new(plain_name(m), metric_points(result, k)));
     }
     chart
 }
