@@ -77,6 +77,21 @@ def test_readme_starts_with_the_job_then_the_two_commands():
     assert TEST_COMMAND in ci, ".ci/run must call exactly the README's test command"
 
 
+def test_the_first_command_runs_as_written_but_on_the_debug_build(tmp_path):
+    # The README's first command, with the debug profile the test run has already built (the
+    # release build would take minutes): it must pick the `spinfoil` binary by itself and write
+    # the executed notebook and the HTML report.
+    args = FIRST_COMMAND.split()
+    assert args[:3] == ["cargo", "run", "--release"]
+    args = ["cargo", "run", "-q", *args[3:]]
+    args[args.index("--out") + 1] = str(tmp_path)
+    done = subprocess.run(args, cwd=REPO, capture_output=True, text=True, check=False)
+    assert done.returncode == 0, done.stderr
+    html = (tmp_path / "kestrel_layups.html").read_text()
+    assert "<svg" in html and CAUTION in html
+    assert (tmp_path / "kestrel_layups.ipynb").is_file()
+
+
 @pytest.mark.parametrize("page", ["README.md", "docs/limits.md"])
 def test_safety_caution_is_shown(page):
     assert CAUTION in (REPO / page).read_text()
