@@ -167,14 +167,16 @@ fn panels(result: &SweepResult, design: &str) -> TimeSeries {
     })
 }
 
+/// One line per metric on a shared scale: only called when every metric has the same unit
+/// (`needs_panels` sends mixed units to panels).
 fn line_chart(result: &SweepResult, design: &str) -> LineChart {
     let spec = &result.spec;
     let unit = result.metric_units.first().cloned().unwrap_or_default();
     let x = Axis::new(input_title(&spec.axes[0].input), result.input_units[0].clone());
-    let y_title = if result.metric_units.iter().all(|u| *u == unit) && spec.metrics.len() > 1 { "result".to_string() } else { plain_name(&spec.metrics[0]) };
-    let mut chart = LineChart::new(format!("Sweep of {design}"), x, Axis::new(y_title, unit.clone()));
+    let y_title = if spec.metrics.len() > 1 { "result".to_string() } else { plain_name(&spec.metrics[0]) };
+    let mut chart = LineChart::new(format!("Sweep of {design}"), x, Axis::new(y_title, unit));
     chart.zero_line = true;
-    for (k, m) in spec.metrics.iter().enumerate().filter(|(k, _)| result.metric_units[*k] == unit) {
+    for (k, m) in spec.metrics.iter().enumerate() {
         chart = chart.series(Series::new(plain_name(m), metric_points(result, k)));
     }
     chart
